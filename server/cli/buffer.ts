@@ -1,0 +1,5 @@
+// Placeholder until the 'buffer' command is written; replaced by its owner.
+export async function run(_args: string[]): Promise<number> {
+  process.stderr.write('bellwether: the buffer command is not available yet\n');
+  return 1;
+}
