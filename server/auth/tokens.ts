@@ -1,0 +1,5 @@
+// Single-use links carry a random token; only its SHA-256 is stored.
+import { createHash, randomBytes } from 'node:crypto';
+
+export const newToken = () => randomBytes(32).toString('base64url');
+export const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');

@@ -1,0 +1,104 @@
+// Every API route × every kind of caller → the expected status. The routes are read from the
+// Express app itself, so a new route without a rule here fails this test.
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { apiRouteList } from '../../server/app';
+import { mailMessages } from '../../server/db/schema';
+import { startTestApp, type TestApp } from './helpers/app';
+import { createTeam, createUser } from './helpers/factories';
+import { writeSession } from './helpers/session';
+
+const personas = ['anonymous', 'viewer', 'scientist', 'lead', 'admin', 'outsider'] as const;
+type Persona = (typeof personas)[number];
+
+// Columns: anonymous viewer scientist lead admin outsider (outsider = a lead of another team).
+// 'ok' = allowed through: any status below 500 except 401, 403 and 404. Bodies are empty, so an
+// allowed mutation usually answers 400 (validation), which shows it got past the access checks.
+const rules: Record<string, string> = {
+  'GET /api/health': 'ok ok ok ok ok ok',
+  'POST /api/auth/sign-in': '400 400 400 400 400 400',
+  'POST /api/auth/sign-out': '401 ok ok ok ok ok',
+  'GET /api/me': '401 ok ok ok ok ok',
+  'POST /api/me/password': '401 400 400 400 400 400',
+  'POST /api/auth/password-reset': '400 400 400 400 400 400',
+  'POST /api/auth/password-reset/complete': '400 400 400 400 400 400',
+  'POST /api/invitations': '401 403 403 400 400 400',
+  'GET /api/invitations/:token': '404 404 404 404 404 404',
+  'POST /api/invitations/:token/accept': '400 400 400 400 400 400',
+  'GET /api/users': '401 403 403 403 ok 403',
+  'PATCH /api/users/:id': '401 403 403 403 400 403',
+  'GET /api/teams': '401 ok ok ok ok ok',
+  'GET /api/teams/:id': '401 ok ok ok ok 404',
+  'POST /api/teams': '401 403 403 403 400 403',
+  'POST /api/teams/:id/members': '401 403 403 403 400 403',
+  'DELETE /api/teams/:id/members/:userId': '401 403 403 403 204 403',
+  'GET /api/audit': '401 403 403 403 ok 403',
+  'GET /api/outbox': '401 403 403 403 ok 403',
+  'GET /api/outbox/:id': '401 403 403 403 ok 403',
+};
+
+let t: TestApp;
+const sessionOf: Partial<Record<Persona, () => Promise<{ cookie: string; csrf: string }>>> = {};
+const ids: Record<string, string> = {};
+
+beforeAll(async () => {
+  t = await startTestApp({ loginLimits: { perAccount: 1000, perAddress: 1000, windowMinutes: 15 } });
+  const teamA = await createTeam(t.db);
+  const teamB = await createTeam(t.db);
+  const people = {
+    viewer: await createUser(t.db, { role: 'viewer', teamIds: [teamA.id] }),
+    scientist: await createUser(t.db, { role: 'scientist', teamIds: [teamA.id] }),
+    lead: await createUser(t.db, { role: 'lead', teamIds: [teamA.id] }),
+    admin: await createUser(t.db, { role: 'admin' }),
+    outsider: await createUser(t.db, { role: 'lead', teamIds: [teamB.id] }),
+  };
+  for (const [persona, user] of Object.entries(people)) {
+    sessionOf[persona as Persona] = () => writeSession(t.db, t.config.sessionSecret, user.id);
+  }
+  const spare = await createUser(t.db, { role: 'scientist', teamIds: [teamA.id] });
+  const [mail] = await t.db
+    .insert(mailMessages)
+    .values({ recipients: ['someone@example.org'], subject: 'test', raw: 'Subject: test\r\n\r\nbody' })
+    .returning();
+  Object.assign(ids, { id: teamA.id, userId: spare.id, token: 'x'.repeat(43), mail: mail.id, user: people.viewer.id });
+});
+
+afterAll(() => t?.close());
+
+function concretePath(path: string) {
+  if (path.startsWith('/api/users/')) return path.replace(':id', ids.user);
+  if (path.startsWith('/api/outbox/')) return path.replace(':id', ids.mail);
+  return path.replace(':id', ids.id).replace(':userId', ids.userId).replace(':token', ids.token);
+}
+
+describe('role matrix', () => {
+  it('has a rule for every route the app serves, and no rule for a route that does not exist', () => {
+    const served = apiRouteList(t.app).map((r) => `${r.method} ${r.path}`).sort();
+    expect(served).toEqual(Object.keys(rules).sort());
+  });
+
+  for (const [route, rule] of Object.entries(rules)) {
+    const expected = rule.split(/\s+/);
+    it.each(personas.map((p, i) => [p, expected[i]] as const))(`${route} as %s → %s`, async (persona, want) => {
+      const [method, path] = route.split(' ');
+      let req = request(t.app)[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](concretePath(path));
+      const make = sessionOf[persona];
+      if (make) {
+        const s = await make();
+        req = req.set('Cookie', s.cookie).set('X-CSRF-Token', s.csrf);
+      }
+      if (method !== 'GET') req = req.send({});
+      const res = await req;
+      if (want === 'ok') {
+        expect(res.status, JSON.stringify(res.body)).toBeLessThan(500);
+        expect([401, 403, 404]).not.toContain(res.status);
+      } else {
+        expect(res.status, JSON.stringify(res.body)).toBe(Number(want));
+      }
+      if (res.status >= 400) {
+        expect(res.body.error.code).toEqual(expect.any(String));
+        expect(res.body.error.message).toEqual(expect.any(String));
+      }
+    });
+  }
+});
