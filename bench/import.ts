@@ -1,0 +1,107 @@
+// Parse speed of a 384-well kinetic workbook with 120 reads (issue 5 "Speed"):
+// exceljs alone reading it, against parseReaderFile (exceljs + detection), and peak memory.
+//   npx tsx bench/import.ts [--runs 5]
+// Each measurement runs in its own child process so its peak memory (max RSS) is its own.
+// GENERATED DATA: the workbook is invented here (seeded), not a measurement.
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import ExcelJS from 'exceljs';
+import { parseReaderFile } from '../server/import';
+
+const READS = 120;
+const LETTERS = 'ABCDEFGHIJKLMNOP';
+
+async function makeWorkbook(): Promise<Buffer> {
+  const workbook = new ExcelJS.Workbook();
+  const sheet = workbook.addWorksheet('Kinetic 405');
+  sheet.getCell('A1').value = 'Generated test data for the Bellwether import benchmark (not a measurement)';
+  sheet.getCell('A2').value = 'Absorbance 405 nm';
+  const wells: string[] = [];
+  for (let r = 0; r < 16; r++) for (let c = 1; c <= 24; c++) wells.push(`${LETTERS[r]}${c}`);
+  sheet.getRow(4).values = ['Time [s]', 'Temp [°C]', ...wells];
+  let seed = 42;
+  const rand = () => (seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
+  const slopes = wells.map(() => 0.0001 + 0.002 * rand());
+  for (let k = 0; k < READS; k++) {
+    const t = k * 30;
+    sheet.getRow(5 + k).values = [
+      t,
+      37 + 0.1 * rand(),
+      ...slopes.map((s) => Math.round((0.05 + s * t + 0.002 * rand()) * 1e4) / 1e4),
+    ];
+  }
+  return Buffer.from(await workbook.xlsx.writeBuffer());
+}
+
+type Mode = 'none' | 'exceljs' | 'parse';
+
+async function child(mode: Mode, file: string, runs: number): Promise<void> {
+  const bytes = readFileSync(file);
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    if (mode === 'exceljs')
+      await new ExcelJS.Workbook().xlsx.load(bytes as unknown as Parameters<ExcelJS.Xlsx['load']>[0]);
+    if (mode === 'parse') {
+      const result = await parseReaderFile(bytes, 'bench.xlsx');
+      if (
+        !result.ok ||
+        result.value.blocks[0].kind !== 'kinetic' ||
+        result.value.blocks[0].times_s.length !== READS
+      ) {
+        throw new Error(`parse did not find the ${READS}-read table`);
+      }
+    }
+    times.push(performance.now() - start);
+  }
+  process.stdout.write(JSON.stringify({ times, maxRssMb: process.resourceUsage().maxRSS / 1024 }));
+}
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+async function main(): Promise<void> {
+  const runs = Number(process.argv[process.argv.indexOf('--runs') + 1]) || 5;
+  const dir = mkdtempSync(join(tmpdir(), 'bellwether-bench-'));
+  const file = join(dir, 'kinetic-384x120.xlsx');
+  try {
+    writeFileSync(file, await makeWorkbook());
+    const self = fileURLToPath(import.meta.url);
+    const measure = (mode: Mode) =>
+      JSON.parse(
+        execFileSync(process.execPath, ['--import', 'tsx', self, '--child', mode, file, String(runs)], {
+          encoding: 'utf8',
+        }),
+      ) as {
+        times: number[];
+        maxRssMb: number;
+      };
+    const base = measure('none');
+    const exceljs = measure('exceljs');
+    const parse = measure('parse');
+    const size = readFileSync(file).length;
+    const lines = [
+      `workbook: 384 wells x ${READS} reads (+ time, temperature), ${(size / 1024).toFixed(0)} KiB, ${runs} runs each (first run included)`,
+      `exceljs load alone   median ${median(exceljs.times).toFixed(0)} ms  (first ${exceljs.times[0].toFixed(0)} ms)  peak RSS ${exceljs.maxRssMb.toFixed(0)} MB`,
+      `parseReaderFile      median ${median(parse.times).toFixed(0)} ms  (first ${parse.times[0].toFixed(0)} ms)  peak RSS ${parse.maxRssMb.toFixed(0)} MB`,
+      `ratio parse / exceljs (medians) ${(median(parse.times) / median(exceljs.times)).toFixed(2)}`,
+      `process baseline (tsx, modules loaded, no work) peak RSS ${base.maxRssMb.toFixed(0)} MB`,
+    ];
+    process.stdout.write(`${lines.join('\n')}\n`);
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+const childAt = process.argv.indexOf('--child');
+if (childAt >= 0) {
+  await child(
+    process.argv[childAt + 1] as Mode,
+    process.argv[childAt + 2],
+    Number(process.argv[childAt + 3]),
+  );
+} else {
+  await main();
+}

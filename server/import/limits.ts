@@ -1,0 +1,13 @@
+// Limits that keep a hostile or broken file from exhausting the server. Plate-reader exports are
+// far below all of them (a 384-well kinetic run of 120 reads is about 50,000 cells).
+export const MAX_FILE_BYTES = 20 * 1024 * 1024;
+export const MAX_SHEETS = 100;
+/** xlsx is a zip: refuse archives that unpack to far more than any reader export (zip bombs). */
+export const MAX_UNPACKED_BYTES = 200 * 1024 * 1024;
+/** The largest sheet a spreadsheet program allows (Excel: 1,048,576 rows × 16,384 columns). */
+export const MAX_ROWS = 1_048_576;
+export const MAX_COLUMNS = 16_384;
+/** Non-empty cells over the whole file. */
+export const MAX_CELLS = 3_000_000;
+/** How far the label search looks above or left of a block. */
+export const LABEL_SEARCH_DISTANCE = 12;
