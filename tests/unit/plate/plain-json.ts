@@ -5,7 +5,9 @@
 export function nonFiniteNumbers(value: unknown, path = '$'): string[] {
   if (typeof value === 'number') return Number.isFinite(value) ? [] : [`${path} = ${value}`];
   if (value === null || typeof value !== 'object') {
-    return typeof value === 'function' || typeof value === 'symbol' || typeof value === 'bigint' ? [`${path} is ${typeof value}`] : [];
+    return typeof value === 'function' || typeof value === 'symbol' || typeof value === 'bigint'
+      ? [`${path} is ${typeof value}`]
+      : [];
   }
   if (ArrayBuffer.isView(value)) return [`${path} is a typed array`];
   const out: string[] = [];

@@ -75,6 +75,11 @@ describe('degenerate regressions return null instead of numbers', () => {
 
   it('treats an exact line as having no curvature (t of the quadratic term is 0)', () => {
     const x = [0, 30, 60, 90, 120, 150, 180];
-    expect(fitQuadratic(x, x.map((t) => 0.05 + 0.0013 * t))!.tQuadratic).toBe(0);
+    expect(
+      fitQuadratic(
+        x,
+        x.map((t) => 0.05 + 0.0013 * t),
+      )!.tQuadratic,
+    ).toBe(0);
   });
 });

@@ -67,7 +67,10 @@ describe("Student's t quantiles", () => {
 
   it('gives I_x(1, 1) = x and I_x(a, b) = 1 − I_{1−x}(b, a) [derived]', () => {
     expect(regularizedIncompleteBeta(0.3, 1, 1)!).toBeCloseTo(0.3, 14);
-    expect(regularizedIncompleteBeta(0.3, 2.5, 4)! + regularizedIncompleteBeta(0.7, 4, 2.5)!).toBeCloseTo(1, 14);
+    expect(regularizedIncompleteBeta(0.3, 2.5, 4)! + regularizedIncompleteBeta(0.7, 4, 2.5)!).toBeCloseTo(
+      1,
+      14,
+    );
   });
 });
 
