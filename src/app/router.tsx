@@ -1,0 +1,72 @@
+// The routes. A root layout (header + navigation) holds the signed-out pages, the protected layout
+// (derived from useUser) and the not-found page. Each screen is a thin, lazily loaded route module
+// whose optional `clientLoader` only warms the query cache.
+import type { QueryClient } from '@tanstack/react-query';
+import type { ComponentType } from 'react';
+import { createBrowserRouter, type LoaderFunctionArgs } from 'react-router';
+import { RouterProvider } from 'react-router/dom';
+import { RouteError } from '@/components/errors/route-error';
+import { AppLayout } from '@/components/layouts/app-layout';
+import { Loading } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { meQueryOptions, RequireAuth } from '@/lib/auth';
+import { queryClient } from '@/lib/query-client';
+
+type RouteModule = {
+  default: ComponentType;
+  clientLoader?: (queryClient: QueryClient) => (args: LoaderFunctionArgs) => Promise<unknown>;
+};
+
+/** Turns a route module into what React Router's `lazy` expects. */
+const load = (importModule: () => Promise<RouteModule>) => async () => {
+  const m = await importModule();
+  return { Component: m.default, loader: m.clientLoader?.(queryClient) };
+};
+
+const rel = (path: string) => path.replace(/^\//, '');
+
+export const router = createBrowserRouter([
+  {
+    path: paths.home.path,
+    element: <AppLayout />,
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Loading label="Opening Bellwether…" />,
+    // Who is signed in decides the header and the navigation: know it before the first paint.
+    loader: () => queryClient.ensureQueryData(meQueryOptions()),
+    children: [
+      { path: rel(paths.signIn.path), lazy: load(() => import('./routes/sign-in')) },
+      { path: rel(paths.resetRequest.path), lazy: load(() => import('./routes/reset-password-request')) },
+      { path: rel(paths.resetPassword.path), lazy: load(() => import('./routes/reset-password')) },
+      { path: rel(paths.invitation.path), lazy: load(() => import('./routes/invitation')) },
+      {
+        element: <RequireAuth />,
+        children: [
+          { index: true, lazy: load(() => import('./routes/home')) },
+          { path: rel(paths.account.path), lazy: load(() => import('./routes/account')) },
+          { path: rel(paths.teams.path), lazy: load(() => import('./routes/teams')) },
+          { path: rel(paths.team.path), lazy: load(() => import('./routes/teams')) },
+        ],
+      },
+      {
+        element: <RequireAuth permission="users:read" />,
+        children: [{ path: rel(paths.people.path), lazy: load(() => import('./routes/admin/people')) }],
+      },
+      {
+        element: <RequireAuth permission="outbox:read" />,
+        children: [
+          { path: rel(paths.outbox.path), lazy: load(() => import('./routes/admin/outbox')) },
+          { path: rel(paths.outboxMessage.path), lazy: load(() => import('./routes/admin/outbox')) },
+        ],
+      },
+      {
+        element: <RequireAuth permission="audit:read" />,
+        children: [{ path: rel(paths.audit.path), lazy: load(() => import('./routes/admin/audit')) }],
+      },
+      { path: '*', lazy: load(() => import('./routes/not-found')) },
+    ],
+  },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}
