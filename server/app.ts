@@ -12,8 +12,11 @@ import { loadCurrentUser } from './auth/current-user';
 import type { AppContext } from './context';
 import { AppError } from './errors';
 import { registerAdminRoutes } from './routes/admin';
+import { registerAssayRoutes } from './routes/assays';
 import { registerAuthRoutes } from './routes/auth';
+import { registerEnzymeRoutes } from './routes/enzymes';
 import { registerHealthRoutes } from './routes/health';
+import { registerStudyRoutes } from './routes/studies';
 
 export type AppDeps = AppContext & { pool: pg.Pool };
 
@@ -24,6 +27,9 @@ const routeModules: ((api: Router, ctx: AppContext) => void)[] = [
   registerHealthRoutes,
   registerAuthRoutes,
   registerAdminRoutes,
+  registerEnzymeRoutes,
+  registerAssayRoutes,
+  registerStudyRoutes,
 ];
 
 function sessionMiddleware({ pool, config }: AppDeps) {

@@ -1,5 +1,159 @@
-// Placeholder until the 'fit' command is written; replaced by its owner.
-export async function run(_args: string[]): Promise<number> {
-  process.stderr.write('bellwether: the fit command is not available yet\n');
-  return 1;
+// `bellwether fit FILE.json [--model bell|acid|base|bell-plateau|auto] [--bootstrap N] [--timing]`
+// Reads the datasets format of the reference README, writes its results format to stdout.
+// Exit codes: 0 when the file was valid (a dataset that cannot be fitted is reported in place),
+// 2 for bad arguments, 1 for a file that cannot be read or is not a datasets file.
+import { readFile } from 'node:fs/promises';
+import { performance } from 'node:perf_hooks';
+import { chooseModel, ENGINE_VERSION, fitProfile, type ModelId, type ProfileFit } from '@shared/fitting';
+
+const MODELS = ['bell', 'acid', 'base', 'bell-plateau', 'auto'] as const;
+type CliModel = (typeof MODELS)[number];
+
+const usage = `usage: bellwether fit FILE.json [--model ${MODELS.join('|')}] [--bootstrap N] [--timing]
+
+Fits an activity-against-pH model to every dataset of FILE.json ({ "datasets": [{ "id", "pH", "v", "w"? }] })
+and writes the results as JSON to standard output.
+  --model      model to fit (default bell); auto proposes the simplest adequate model
+  --bootstrap  residual-bootstrap resamples for the optimum and the half-activity window
+  --timing     print fit_loop_s=<s> n=<datasets> fits_per_s=<n> to standard error
+`;
+
+interface Args {
+  file: string;
+  model: CliModel;
+  bootstrap: number;
+  timing: boolean;
+}
+
+function parseArgs(args: string[]): Args | string {
+  let file: string | null = null;
+  let model: CliModel = 'bell';
+  let bootstrap = 0;
+  let timing = false;
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i];
+    if (a === '--timing') timing = true;
+    else if (a === '--model') {
+      const m = args[++i];
+      if (!MODELS.includes(m as CliModel)) return `--model needs one of ${MODELS.join(', ')}${m ? `, not '${m}'` : ''}`;
+      model = m as CliModel;
+    } else if (a === '--bootstrap') {
+      const v = args[++i];
+      if (!v || !/^\d+$/.test(v) || Number(v) > 1_000_000) return '--bootstrap needs a whole number of resamples (0 to 1000000)';
+      bootstrap = Number(v);
+    } else if (a.startsWith('-')) return `unknown option '${a}'`;
+    else if (file === null) file = a;
+    else return `only one FILE.json is read, got '${file}' and '${a}'`;
+  }
+  if (file === null) return 'no FILE.json given';
+  return { file, model, bootstrap, timing };
+}
+
+type Dataset = { id: string; pH: number[]; v: number[]; w?: number[] | null };
+
+function readDatasets(text: string): Dataset[] | string {
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch (error) {
+    return `it is not valid JSON (${error instanceof Error ? error.message : String(error)})`;
+  }
+  const list = (json as { datasets?: unknown } | null)?.datasets;
+  if (!Array.isArray(list)) return 'it has no "datasets" array';
+  const out: Dataset[] = [];
+  for (const [i, d] of list.entries()) {
+    if (d === null || typeof d !== 'object') return `dataset ${i + 1} is not an object`;
+    const { id, pH, v, w } = d as Record<string, unknown>;
+    // contents are checked by the engine; here only the shape that lets a result name its dataset
+    out.push({ id: typeof id === 'string' || typeof id === 'number' ? String(id) : `#${i + 1}`, pH, v, w } as Dataset);
+  }
+  return out;
+}
+
+const PARAMS: Record<ModelId, string[]> = {
+  bell: ['V', 'pKa1', 'pKa2'],
+  acid: ['V', 'pKa'],
+  base: ['V', 'pKa'],
+  'bell-plateau': ['V_lo', 'V_mid', 'V_hi', 'pKa1', 'pKa2'],
+  three: ['V', 'pKa', 'pKb', 'pKc'],
+};
+
+function resultOf(id: string, fit: ProfileFit, bootstrap: number): Record<string, unknown> {
+  const out: Record<string, unknown> = { id, model: fit.model, n: fit.n, dof: fit.dof };
+  const se: Record<string, number | null> = {};
+  for (const name of PARAMS[fit.model]) {
+    out[name] = fit.parameters[name].value;
+    se[name] = fit.parameters[name].se;
+  }
+  out.se = se;
+  out.pHopt = fit.pHopt.value;
+  out.pHopt_se = fit.pHopt.se;
+  out.ssr = fit.ssr;
+  out.converged = fit.converged;
+  out.flags = fit.flags.map((f) => f.code);
+  if (bootstrap > 0) {
+    out.pHopt_ci95_boot = fit.pHopt.boot95;
+    out.window = [fit.window.lo.value, fit.window.hi.value];
+    out.window_lo_ci95_boot = fit.window.lo.boot95;
+    out.window_hi_ci95_boot = fit.window.hi.boot95;
+    out.bootstrap = fit.bootstrap;
+  }
+  return out;
+}
+
+function failedResult(id: string, model: CliModel, n: number, code: string, message: string): Record<string, unknown> {
+  const fitted = model === 'auto' ? 'bell' : model;
+  const out: Record<string, unknown> = { id, model: fitted, n, dof: null };
+  for (const name of PARAMS[fitted]) out[name] = null;
+  out.se = Object.fromEntries(PARAMS[fitted].map((name) => [name, null]));
+  Object.assign(out, { pHopt: null, pHopt_se: null, ssr: null, converged: false, flags: [code], error: message });
+  return out;
+}
+
+function fitOne(d: Dataset, args: Args): Record<string, unknown> {
+  const n = Array.isArray(d.pH) ? d.pH.length : 0;
+  const options = { profile: false, alternative: false, bootstrap: args.bootstrap };
+  if (args.model === 'auto') {
+    const choice = chooseModel(d, options);
+    return choice.ok
+      ? resultOf(d.id, choice.value.fit, args.bootstrap)
+      : failedResult(d.id, args.model, n, choice.error.code, choice.error.message);
+  }
+  const fit = fitProfile(d, { ...options, model: args.model });
+  return fit.ok ? resultOf(d.id, fit.value, args.bootstrap) : failedResult(d.id, args.model, n, fit.error.code, fit.error.message);
+}
+
+export async function run(argv: string[]): Promise<number> {
+  if (argv.includes('--help') || argv.includes('-h')) {
+    process.stdout.write(usage);
+    return 0;
+  }
+  const args = parseArgs(argv);
+  if (typeof args === 'string') {
+    process.stderr.write(`bellwether fit: ${args}\n\n${usage}`);
+    return 2;
+  }
+  let text: string;
+  try {
+    text = await readFile(args.file, 'utf8');
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    process.stderr.write(`bellwether fit: cannot read ${args.file}${code ? ` (${code})` : ''}\n`);
+    return 1;
+  }
+  const datasets = readDatasets(text);
+  if (typeof datasets === 'string') {
+    process.stderr.write(`bellwether fit: ${args.file} is not a datasets file: ${datasets}\n`);
+    return 1;
+  }
+  const t0 = performance.now();
+  const results = datasets.map((d) => fitOne(d, args));
+  const loop = (performance.now() - t0) / 1000;
+  const engine = { name: 'bellwether', version: ENGINE_VERSION, model: args.model };
+  process.stdout.write(JSON.stringify({ engine, results }) + '\n');
+  if (args.timing) {
+    const rate = loop > 0 ? Math.round(datasets.length / loop) : 0;
+    process.stderr.write(`fit_loop_s=${loop.toFixed(4)} n=${datasets.length} fits_per_s=${rate}\n`);
+  }
+  return 0;
 }

@@ -4,7 +4,10 @@ import { sql } from 'drizzle-orm';
 import {
   bigserial,
   boolean,
+  date,
+  doublePrecision,
   index,
+  integer,
   json,
   jsonb,
   pgEnum,
@@ -17,6 +20,8 @@ import {
   varchar,
 } from 'drizzle-orm/pg-core';
 import { roles } from '../../shared/permissions';
+import { detections, quantitations, readModes } from '../../shared/schemas/assays';
+import { studyStatuses } from '../../shared/schemas/studies';
 
 export const roleEnum = pgEnum('role', roles);
 
@@ -120,3 +125,155 @@ export const mailMessages = pgTable('mail_messages', {
   html: text(),
   raw: text().notNull(),
 });
+
+// ---- Records of the science: enzymes, variants, preparations, assays, buffers, studies ----
+
+const updatedAt = () => timestamp({ withTimezone: true }).notNull().defaultNow();
+const teamRef = () =>
+  uuid()
+    .notNull()
+    .references(() => teams.id);
+const userRef = () =>
+  uuid()
+    .notNull()
+    .references(() => users.id);
+
+export const enzymes = pgTable('enzymes', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  name: text().notNull(),
+  organism: text().notNull().default(''),
+  notes: text().notNull().default(''),
+  createdBy: userRef(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const variants = pgTable(
+  'variants',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    teamId: teamRef(),
+    enzymeId: uuid()
+      .notNull()
+      .references(() => enzymes.id, { onDelete: 'cascade' }),
+    name: text().notNull(),
+    /** Normalised one-letter notation, e.g. "D92N/S110A"; empty for the parent. */
+    mutations: text().notNull().default(''),
+    isParent: boolean().notNull().default(false),
+    notes: text().notNull().default(''),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex('variants_enzyme_name_key').on(t.enzymeId, t.name)],
+);
+
+export const preparations = pgTable('preparations', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  variantId: uuid()
+    .notNull()
+    .references(() => variants.id, { onDelete: 'cascade' }),
+  lot: text().notNull(),
+  proteinMgPerMl: doublePrecision().notNull(),
+  preparedOn: date().notNull(),
+  storageBuffer: text().notNull().default(''),
+  notes: text().notNull().default(''),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const readModeEnum = pgEnum('read_mode', readModes);
+export const detectionEnum = pgEnum('detection', detections);
+export const quantitationEnum = pgEnum('quantitation', quantitations);
+
+export const assays = pgTable('assays', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  name: text().notNull(),
+  substrate: text().notNull(),
+  substrateMm: doublePrecision().notNull(),
+  kmMm: doublePrecision(),
+  substrateRegime: text().notNull().default('unknown'),
+  readMode: readModeEnum().notNull(),
+  detection: detectionEnum().notNull(),
+  wavelengthNm: integer().notNull(),
+  emissionNm: integer(),
+  quantitation: quantitationEnum().notNull(),
+  extinctionCoefficient: doublePrecision(),
+  extinctionUnit: text().notNull().default('M-1cm-1'),
+  pathLengthCm: doublePrecision(),
+  wellVolumeUl: doublePrecision().notNull(),
+  temperatureC: doublePrecision().notNull(),
+  stopSolution: text().notNull().default(''),
+  chromophorePka: doublePrecision(),
+  notes: text().notNull().default(''),
+  createdBy: userRef(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+/** The buffer library: built-in systems (from shared/chemistry) and lab-added ones (admins). */
+export const bufferSystems = pgTable('buffer_systems', {
+  id: uuid().primaryKey().defaultRandom(),
+  slug: text().notNull().unique(),
+  name: text().notNull(),
+  builtIn: boolean().notNull().default(false),
+  /** The full system as shared/chemistry's buffer-system schema describes it. */
+  data: jsonb().notNull(),
+  createdBy: uuid().references(() => users.id),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const bufferSeries = pgTable('buffer_series', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  name: text().notNull(),
+  /** What the scientist asked for: pH points, temperature, concentration, ionic strength, choices. */
+  input: jsonb().notNull(),
+  /** The designed points with their recipes, as the designer returned them when saved. */
+  design: jsonb().notNull(),
+  createdBy: userRef(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+  version: integer().notNull().default(1),
+});
+
+export const studyStatusEnum = pgEnum('study_status', studyStatuses);
+
+export const studies = pgTable('studies', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  name: text().notNull(),
+  enzymeId: uuid()
+    .notNull()
+    .references(() => enzymes.id),
+  referenceVariantId: uuid()
+    .notNull()
+    .references(() => variants.id),
+  assayId: uuid()
+    .notNull()
+    .references(() => assays.id),
+  bufferSeriesId: uuid().references(() => bufferSeries.id),
+  ownerId: userRef(),
+  status: studyStatusEnum().notNull().default('draft'),
+  notes: text().notNull().default(''),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+  version: integer().notNull().default(1),
+});
+
+export const studyVariants = pgTable(
+  'study_variants',
+  {
+    studyId: uuid()
+      .notNull()
+      .references(() => studies.id, { onDelete: 'cascade' }),
+    variantId: uuid()
+      .notNull()
+      .references(() => variants.id),
+    position: integer().notNull().default(0),
+  },
+  (t) => [primaryKey({ columns: [t.studyId, t.variantId] })],
+);

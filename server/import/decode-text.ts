@@ -1,5 +1,5 @@
-// Decoding a text table: a byte-order mark decides (UTF-8, UTF-16 LE/BE); without one, strict
-// UTF-8, then UTF-16 recognised by its zero bytes, then Latin-1 (Windows-1252), which accepts any
+// Decoding a text table: a byte-order mark decides (UTF-8, UTF-16 LE/BE); without one, UTF-16
+// recognised by its zero bytes, then strict UTF-8, then Latin-1 (Windows-1252), which accepts any
 // bytes — so binary content is recognised afterwards by its control characters.
 import { ImportError } from './errors';
 import { EXPECTED } from './sniff';
@@ -28,13 +28,14 @@ function decode(bytes: Uint8Array): DecodedText {
     return { text: new TextDecoder('utf-16le').decode(bytes.subarray(2)), encoding: 'utf-16le' };
   if (bytes[0] === 0xfe && bytes[1] === 0xff)
     return { text: new TextDecoder('utf-16be').decode(bytes.subarray(2)), encoding: 'utf-16be' };
+  // Before UTF-8: ASCII written as UTF-16 is also valid UTF-8, full of NUL characters.
+  const utf16 = utf16WithoutMark(bytes);
+  if (utf16) return { text: new TextDecoder(utf16).decode(bytes), encoding: utf16 };
   try {
     return { text: new TextDecoder('utf-8', { fatal: true }).decode(bytes), encoding: 'utf-8' };
   } catch {
-    // not UTF-8: try the other spellings below
+    // not UTF-8: Latin-1 below
   }
-  const utf16 = utf16WithoutMark(bytes);
-  if (utf16) return { text: new TextDecoder(utf16).decode(bytes), encoding: utf16 };
   return { text: new TextDecoder('windows-1252').decode(bytes), encoding: 'windows-1252' };
 }
 

@@ -6,7 +6,7 @@ import { findKineticColumns } from './find-kinetic-columns';
 import { findKineticRows } from './find-kinetic-rows';
 import { findLongTables } from './find-long-tables';
 import { findPlateGrids } from './find-plate-grids';
-import { cellRef, type Grid, type Region } from './grid';
+import { cellRef, parseRef, type Grid, type Region } from './grid';
 import { findLabel, wavelengthsOf } from './labels';
 import type { BlockDetail, ParseNote, ParsedBlock } from './types';
 
@@ -17,7 +17,7 @@ export function detectBlocks(grids: Grid[], notes: ParseNote[]): ParsedBlock[] {
   const blocks: ParsedBlock[] = [];
   for (const grid of grids) {
     const context: DetectContext = { grid, claimed: [], notes };
-    const drafts = DETECTORS.flatMap((detect) => detect(context));
+    const drafts = DETECTORS.flatMap((detect) => blameCutShort(grid, () => detect(context)));
     drafts.sort((a, b) => a.region.top - b.region.top || a.region.left - b.region.left);
     for (const draft of drafts) {
       checkNotCutShort(grid, draft.region);
@@ -69,6 +69,25 @@ function fallbackLabel(draft: Draft, topLeft: string): string {
         ? 'Plate grid'
         : 'Table';
   return `${what} at ${topLeft}`;
+}
+
+/**
+ * A defect in the last cell of a text file that stops mid-line ('A0' for 'A05', '1:3' for
+ * '1:30') is the cut, not the data: say that the file was cut short.
+ */
+function blameCutShort<T>(grid: Grid, detect: () => T): T {
+  try {
+    return detect();
+  } catch (error) {
+    const open = grid.openLastRow;
+    const at = error instanceof ImportError && error.cell ? parseRef(error.cell) : null;
+    if (!open || !at || at.row !== open.row || at.column !== open.fields - 1) throw error;
+    throw new ImportError(
+      'truncated',
+      `${where(grid.name, (error as ImportError).cell)}the file ends in the middle of this line (${(error as ImportError).message.replace(/^Sheet '.*?', cell \w+: /, '')}); it looks cut short. Export it again.`,
+      { sheet: grid.name, cell: (error as ImportError).cell },
+    );
+  }
 }
 
 /**

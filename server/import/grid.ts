@@ -77,6 +77,14 @@ export function cellRef(row: number, column: number): string {
   return `${columnLetters(column)}${row + 1}`;
 }
 
+/** 'B14' -> { row: 13, column: 1 }; null for anything else. */
+export function parseRef(ref: string): { row: number; column: number } | null {
+  const match = /^([A-Z]{1,3})(\d+)$/.exec(ref);
+  if (!match) return null;
+  const column = [...match[1]].reduce((n, ch) => n * 26 + ch.charCodeAt(0) - 64, 0) - 1;
+  return { row: Number(match[2]) - 1, column };
+}
+
 /** What a cell holds, as a person would read it (for messages and raw values). */
 export function cellText(cell: Cell | undefined): string {
   if (!cell) return '';

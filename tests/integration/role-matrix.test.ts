@@ -6,6 +6,7 @@ import { apiRouteList } from '../../server/app';
 import { mailMessages } from '../../server/db/schema';
 import { startTestApp, type TestApp } from './helpers/app';
 import { createTeam, createUser } from './helpers/factories';
+import { createPreparation, createStudyWorld } from './helpers/records';
 import { writeSession } from './helpers/session';
 
 const personas = ['anonymous', 'viewer', 'scientist', 'lead', 'admin', 'outsider'] as const;
@@ -35,11 +36,39 @@ const rules: Record<string, string> = {
   'GET /api/audit': '401 403 403 403 ok 403',
   'GET /api/outbox': '401 403 403 403 ok 403',
   'GET /api/outbox/:id': '401 403 403 403 ok 403',
+  // Records of team A. Mutations of an approved study answer 409 to those allowed through.
+  'GET /api/enzymes': '401 ok ok ok ok ok',
+  'POST /api/enzymes': '401 403 400 400 400 400',
+  'GET /api/enzymes/:id': '401 ok ok ok ok 404',
+  'PATCH /api/enzymes/:id': '401 403 ok ok ok 404',
+  'DELETE /api/enzymes/:id': '401 403 409 409 409 404',
+  'POST /api/enzymes/:id/variants': '401 403 400 400 400 400',
+  'PATCH /api/variants/:id': '401 403 ok ok ok 404',
+  'DELETE /api/variants/:id': '401 403 409 409 409 404',
+  'POST /api/variants/:id/preparations': '401 403 400 400 400 400',
+  'PATCH /api/preparations/:id': '401 403 ok ok ok 404',
+  'DELETE /api/preparations/:id': '401 403 204 204 204 404',
+  'GET /api/assays': '401 ok ok ok ok ok',
+  'POST /api/assays': '401 403 400 400 400 400',
+  'GET /api/assays/:id': '401 ok ok ok ok 404',
+  'PATCH /api/assays/:id': '401 403 ok ok ok 404',
+  'DELETE /api/assays/:id': '401 403 409 409 409 404',
+  'GET /api/studies': '401 ok ok ok ok ok',
+  'POST /api/studies': '401 403 400 400 400 400',
+  'GET /api/studies/:id': '401 ok ok ok ok 404',
+  'PATCH /api/studies/:id': '401 403 409 409 409 404',
+  'DELETE /api/studies/:id': '401 403 409 409 409 404',
+};
+
+/** Routes that destroy their target get a fresh one for every caller. */
+const freshTarget: Record<string, () => Promise<Record<string, string>>> = {
+  'DELETE /api/preparations/:id': async () => ({ id: (await createPreparation(t.db, world.variant)).id }),
 };
 
 let t: TestApp;
 const sessionOf: Partial<Record<Persona, () => Promise<{ cookie: string; csrf: string }>>> = {};
 const ids: Record<string, string> = {};
+let world: Awaited<ReturnType<typeof createStudyWorld>>;
 
 beforeAll(async () => {
   t = await startTestApp({ loginLimits: { perAccount: 1000, perAddress: 1000, windowMinutes: 15 } });
@@ -61,14 +90,24 @@ beforeAll(async () => {
     .values({ recipients: ['someone@example.org'], subject: 'test', raw: 'Subject: test\r\n\r\nbody' })
     .returning();
   Object.assign(ids, { id: teamA.id, userId: spare.id, token: 'x'.repeat(43), mail: mail.id, user: people.viewer.id });
+  world = await createStudyWorld(t.db, teamA.id, people.scientist.id, { status: 'approved' });
+  const prep = await createPreparation(t.db, world.variant);
+  Object.assign(ids, {
+    enzymes: world.enzyme.id,
+    variants: world.variant.id,
+    preparations: prep.id,
+    assays: world.assay.id,
+    studies: world.study.id,
+  });
 });
 
 afterAll(() => t?.close());
 
-function concretePath(path: string) {
-  if (path.startsWith('/api/users/')) return path.replace(':id', ids.user);
-  if (path.startsWith('/api/outbox/')) return path.replace(':id', ids.mail);
-  return path.replace(':id', ids.id).replace(':userId', ids.userId).replace(':token', ids.token);
+/** Fills a route's parameters: `:id` means the record of the route's own resource. */
+function concretePath(path: string, extra: Record<string, string> = {}) {
+  const resource = path.split('/')[2];
+  const own = extra.id ?? { users: ids.user, outbox: ids.mail, teams: ids.id }[resource] ?? ids[resource];
+  return path.replace(':id', own).replace(':userId', ids.userId).replace(':token', ids.token);
 }
 
 describe('role matrix', () => {
@@ -81,7 +120,8 @@ describe('role matrix', () => {
     const expected = rule.split(/\s+/);
     it.each(personas.map((p, i) => [p, expected[i]] as const))(`${route} as %s → %s`, async (persona, want) => {
       const [method, path] = route.split(' ');
-      let req = request(t.app)[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](concretePath(path));
+      const extra = (await freshTarget[route]?.()) ?? {};
+      let req = request(t.app)[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](concretePath(path, extra));
       const make = sessionOf[persona];
       if (make) {
         const s = await make();
