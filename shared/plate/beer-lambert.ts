@@ -60,6 +60,8 @@ export function concentrationFromAbsorbance(
   if (!isFiniteNumber(absorbance))
     return fail('invalid_input', `The absorbance is not a number (${String(absorbance)}).`);
   const molar = absorbance / el.value;
+  if (!Number.isFinite(molar * 1e6))
+    return fail('degenerate', 'The concentration cannot be computed from these numbers.');
   return ok({ molar, micromolar: molar * 1e6 });
 }
 
@@ -86,6 +88,9 @@ export function rateFromAbsorbanceSlope(
   const perSecond = options.timeUnit === 'min' ? 1 / 60 : 1;
   const molarPerSecond = (slope * perSecond) / el.value;
   const se = isFiniteNumber(options.slopeSe) ? (Math.abs(options.slopeSe) * perSecond) / el.value : null;
+  if (![molarPerSecond * 60e6, (se ?? 0) * 60e6].every(Number.isFinite)) {
+    return fail('degenerate', 'The rate cannot be computed from these numbers.');
+  }
   return ok({
     molarPerSecond,
     micromolarPerMinute: molarPerSecond * 60e6,

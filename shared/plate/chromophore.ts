@@ -43,5 +43,8 @@ export function effectiveExtinction(
   }
   const fraction = absorbingFraction(pH, pKa, form);
   if (!fraction.ok) return fraction;
-  return ok({ value: epsilon.value * fraction.value, unit: epsilon.unit, fraction: fraction.value });
+  const value = epsilon.value * fraction.value;
+  if (!Number.isFinite(value))
+    return fail('degenerate', 'The effective extinction cannot be computed from these numbers.');
+  return ok({ value, unit: epsilon.unit, fraction: fraction.value });
 }

@@ -46,7 +46,7 @@ export function specificActivity(input: SpecificActivityInput): PlateResult<Spec
   const proteinMg = (proteinMgPerMl / dilution) * enzymeVolumeUl * 1e-3;
   const unitsPerMg = micromolesPerMinute / proteinMg;
   const se = isFiniteNumber(rateSe) ? (Math.abs(rateSe) * 60 * wellVolumeUl) / proteinMg : null;
-  if (!Number.isFinite(unitsPerMg))
+  if (![unitsPerMg, micromolesPerMinute, proteinMg].every(Number.isFinite) || proteinMg === 0)
     return fail('degenerate', 'The specific activity cannot be computed from these numbers.');
   return ok({
     unitsPerMg,
