@@ -16,6 +16,7 @@ import { registerAssayRoutes } from './routes/assays';
 import { registerAuthRoutes } from './routes/auth';
 import { registerEnzymeRoutes } from './routes/enzymes';
 import { registerHealthRoutes } from './routes/health';
+import { registerPlateRoutes } from './routes/plates';
 import { registerStudyRoutes } from './routes/studies';
 
 export type AppDeps = AppContext & { pool: pg.Pool };
@@ -30,6 +31,7 @@ const routeModules: ((api: Router, ctx: AppContext) => void)[] = [
   registerEnzymeRoutes,
   registerAssayRoutes,
   registerStudyRoutes,
+  registerPlateRoutes,
 ];
 
 function sessionMiddleware({ pool, config }: AppDeps) {

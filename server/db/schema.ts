@@ -4,6 +4,7 @@ import { sql } from 'drizzle-orm';
 import {
   bigserial,
   boolean,
+  customType,
   date,
   doublePrecision,
   index,
@@ -276,4 +277,95 @@ export const studyVariants = pgTable(
     position: integer().notNull().default(0),
   },
   (t) => [primaryKey({ columns: [t.studyId, t.variantId] })],
+);
+
+// ---- Plates, plate maps, reader files and reads ----
+
+const bytea = customType<{ data: Buffer; driverData: Buffer }>({ dataType: () => 'bytea' });
+
+export const plates = pgTable('plates', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  studyId: uuid()
+    .notNull()
+    .references(() => studies.id, { onDelete: 'cascade' }),
+  name: text().notNull(),
+  format: integer().notNull(),
+  /** The plate map (shared/plate-map schema). */
+  map: jsonb().notNull(),
+  /** Optimistic concurrency: a save based on an older version gets 409. */
+  version: integer().notNull().default(1),
+  createdBy: userRef(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const plateTemplates = pgTable('plate_templates', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  name: text().notNull(),
+  format: integer().notNull(),
+  map: jsonb().notNull(),
+  createdBy: userRef(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+/** An uploaded reader file, kept byte for byte. */
+export const readerFiles = pgTable(
+  'reader_files',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    teamId: teamRef(),
+    plateId: uuid()
+      .notNull()
+      .references(() => plates.id, { onDelete: 'cascade' }),
+    fileName: text().notNull(),
+    sizeBytes: integer().notNull(),
+    sha256: text().notNull(),
+    contentType: text().notNull(),
+    content: bytea().notNull(),
+    uploadedBy: userRef(),
+    uploadedAt: createdAt(),
+  },
+  (t) => [index('reader_files_sha_idx').on(t.teamId, t.sha256)],
+);
+
+/** One block of a reader file imported into a plate: an end-point read or a kinetic read. */
+export const reads = pgTable('reads', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  plateId: uuid()
+    .notNull()
+    .references(() => plates.id, { onDelete: 'cascade' }),
+  fileId: uuid()
+    .notNull()
+    .references(() => readerFiles.id, { onDelete: 'cascade' }),
+  blockIndex: integer().notNull(),
+  kind: readModeEnum().notNull(),
+  label: text().notNull(),
+  wavelengthNm: integer(),
+  sheet: text().notNull(),
+  location: text().notNull(),
+  /** Kinetic reads: seconds from the first read. */
+  timesS: doublePrecision().array(),
+  createdAt: createdAt(),
+});
+
+export const wellRecords = pgTable(
+  'well_records',
+  {
+    readId: uuid()
+      .notNull()
+      .references(() => reads.id, { onDelete: 'cascade' }),
+    well: varchar({ length: 4 }).notNull(),
+    /** End-point value (null = missing, see flag). */
+    value: doublePrecision(),
+    /** Kinetic values in the order of reads.times_s (nulls = missing points). */
+    values: doublePrecision().array().$type<(number | null)[]>(),
+    /** Why a value is missing: saturated | empty | invalid. */
+    flag: text(),
+    pointFlags: jsonb(),
+  },
+  (t) => [primaryKey({ columns: [t.readId, t.well] })],
 );

@@ -4,7 +4,9 @@ import { kineticWells, readTemperatures, temperatureNote, type DetectContext, ty
 import { ImportError, where } from './errors';
 import { cellRef, cellText, inRegion, overlaps, type Grid, type Region } from './grid';
 import { TEMPERATURE_HEADER } from './find-long-tables';
+import { parseNumberText, readMeasure } from './measure';
 import { readTime, unitFromHeader } from './time';
+import type { ParseNote } from './types';
 import { buildTimeAxis, type TimeCell } from './time-axis';
 import { formatHolding, looksLikeWellName, parseWellName, wellName, type WellPosition } from './wells';
 
@@ -43,16 +45,23 @@ function readTable(
   const hasTemperatureRow =
     TEMPERATURE_HEADER.test(grid.text(firstRow - 1, wellColumn) ?? '') && firstRow >= 2;
   const headerRow = hasTemperatureRow ? firstRow - 2 : firstRow - 1;
+  // The corner above the wells is a header (empty, "Well", "Time [s]"), never a value.
+  const cornerCell = grid.get(headerRow, wellColumn);
+  if (cornerCell && (cornerCell.t !== 's' || parseNumberText(cornerCell.v) !== null)) return null;
   const corner = grid.text(headerRow, wellColumn) ?? '';
   const times = readTimeRow(grid, headerRow, wellColumn, unitFromHeader(corner));
   if (times.cells.length < 2) return null;
   const headerRef = cellRef(headerRow, wellColumn);
-  const axis = buildTimeAxis(times.cells, grid.name, headerRef, notes);
+  const axisNotes: ParseNote[] = [];
+  const axis = timeAxisOrNull(times.cells, grid.name, headerRef, axisNotes, corner === '');
+  if (!axis) return null;
   const columnOf = (k: number) => times.columns[axis.order[k]];
   const series = wells.map(({ row, position }) => ({
     position,
     cells: axis.times.map((_, k) => grid.get(row, columnOf(k))),
   }));
+  if (!series.some((s) => s.cells.some((cell) => readMeasure(cell).value !== null))) return null; // no reading: not a table
+  notes.push(...axisNotes);
   for (const { column, text } of times.skipped) {
     notes.push({
       sheet: grid.name,
@@ -88,6 +97,25 @@ function readTable(
       ...kineticWells(series),
     },
   };
+}
+
+/**
+ * The header's times, or null when a header without a name repeats a time: then the row above the
+ * wells was not a time header at all.
+ */
+function timeAxisOrNull(
+  cells: TimeCell[],
+  sheet: string,
+  headerRef: string,
+  notes: ParseNote[],
+  unnamed: boolean,
+) {
+  try {
+    return buildTimeAxis(cells, sheet, headerRef, notes);
+  } catch (error) {
+    if (unnamed && error instanceof ImportError && error.code === 'duplicate_time') return null;
+    throw error;
+  }
 }
 
 function readWellRun(

@@ -56,6 +56,14 @@ function tooBig(sheet: string): never {
 
 function toCell(cell: ExcelJS.Cell, date1904: boolean): Cell | undefined {
   if (cell.isMerged && cell.master.address !== cell.address) return { t: 'm', master: cell.master.address };
+  if (cell.type === ExcelJS.ValueType.Formula) {
+    // cell.result, not cell.value.result: exceljs 4.4 drops a saved result of 0, '' or FALSE from
+    // cell.value (its copy keeps only truthy fields), which would turn a reading of 0 into a gap.
+    const result: unknown = cell.result;
+    return result === undefined || result === null
+      ? { t: 'f', formula: String(cell.formula ?? '') }
+      : fromValue(result, date1904);
+  }
   return fromValue(cell.value, date1904);
 }
 

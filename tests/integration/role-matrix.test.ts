@@ -3,7 +3,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRouteList } from '../../server/app';
-import { mailMessages } from '../../server/db/schema';
+import { mailMessages, plates, plateTemplates, readerFiles, reads } from '../../server/db/schema';
 import { startTestApp, type TestApp } from './helpers/app';
 import { createTeam, createUser } from './helpers/factories';
 import { createPreparation, createStudyWorld } from './helpers/records';
@@ -58,11 +58,31 @@ const rules: Record<string, string> = {
   'GET /api/studies/:id': '401 ok ok ok ok 404',
   'PATCH /api/studies/:id': '401 403 409 409 409 404',
   'DELETE /api/studies/:id': '401 403 409 409 409 404',
+  'GET /api/studies/:id/plates': '401 ok ok ok ok 404',
+  'POST /api/studies/:id/plates': '401 403 400 400 400 400',
+  'GET /api/plates/:id': '401 ok ok ok ok 404',
+  'PATCH /api/plates/:id': '401 403 400 400 400 400',
+  'PUT /api/plates/:id/map': '401 403 400 400 400 400',
+  'POST /api/plates/:id/copy': '401 403 400 400 400 400',
+  'DELETE /api/plates/:id': '401 403 409 409 409 404',
+  'POST /api/plates/:id/reads/preview': '401 403 400 400 400 400',
+  'POST /api/plates/:id/reads': '401 403 400 400 400 400',
+  'GET /api/plates/:id/reads': '401 ok ok ok ok 404',
+  'GET /api/reads/:id': '401 ok ok ok ok 404',
+  'DELETE /api/reads/:id': '401 403 409 409 409 404',
+  'GET /api/reader-files/:id/raw': '401 ok ok ok ok 404',
+  'GET /api/plate-templates': '401 ok ok ok ok ok',
+  'POST /api/plate-templates': '401 403 400 400 400 400',
+  'DELETE /api/plate-templates/:id': '401 403 204 204 204 404',
 };
 
 /** Routes that destroy their target get a fresh one for every caller. */
 const freshTarget: Record<string, () => Promise<Record<string, string>>> = {
   'DELETE /api/preparations/:id': async () => ({ id: (await createPreparation(t.db, world.variant)).id }),
+  'DELETE /api/plate-templates/:id': async () => {
+    const [tpl] = await t.db.insert(plateTemplates).values({ teamId: world.study.teamId, name: 'T', format: 96, map: { wells: {} }, createdBy: world.study.ownerId }).returning();
+    return { id: tpl.id };
+  },
 };
 
 let t: TestApp;
@@ -99,6 +119,19 @@ beforeAll(async () => {
     assays: world.assay.id,
     studies: world.study.id,
   });
+  const [plate] = await t.db
+    .insert(plates)
+    .values({ teamId: teamA.id, studyId: world.study.id, name: 'P', format: 96, map: { wells: {} }, createdBy: people.scientist.id })
+    .returning();
+  const [file] = await t.db
+    .insert(readerFiles)
+    .values({ teamId: teamA.id, plateId: plate.id, fileName: 'r.csv', sizeBytes: 3, sha256: 'x', contentType: 'text/csv', content: Buffer.from('a,b'), uploadedBy: people.scientist.id })
+    .returning();
+  const [read] = await t.db
+    .insert(reads)
+    .values({ teamId: teamA.id, plateId: plate.id, fileId: file.id, blockIndex: 0, kind: 'endpoint', label: 'r', sheet: 's', location: 'A1:M9' })
+    .returning();
+  Object.assign(ids, { plates: plate.id, 'reader-files': file.id, reads: read.id });
 });
 
 afterAll(() => t?.close());
