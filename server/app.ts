@@ -17,6 +17,7 @@ import { registerAuthRoutes } from './routes/auth';
 import { registerEnzymeRoutes } from './routes/enzymes';
 import { registerHealthRoutes } from './routes/health';
 import { registerPlateRoutes } from './routes/plates';
+import { registerReviewRoutes } from './routes/review';
 import { registerStudyRoutes } from './routes/studies';
 
 export type AppDeps = AppContext & { pool: pg.Pool };
@@ -32,6 +33,7 @@ const routeModules: ((api: Router, ctx: AppContext) => void)[] = [
   registerAssayRoutes,
   registerStudyRoutes,
   registerPlateRoutes,
+  registerReviewRoutes,
 ];
 
 function sessionMiddleware({ pool, config }: AppDeps) {

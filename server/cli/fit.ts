@@ -35,11 +35,13 @@ function parseArgs(args: string[]): Args | string {
     if (a === '--timing') timing = true;
     else if (a === '--model') {
       const m = args[++i];
-      if (!MODELS.includes(m as CliModel)) return `--model needs one of ${MODELS.join(', ')}${m ? `, not '${m}'` : ''}`;
+      if (!MODELS.includes(m as CliModel))
+        return `--model needs one of ${MODELS.join(', ')}${m ? `, not '${m}'` : ''}`;
       model = m as CliModel;
     } else if (a === '--bootstrap') {
       const v = args[++i];
-      if (!v || !/^\d+$/.test(v) || Number(v) > 1_000_000) return '--bootstrap needs a whole number of resamples (0 to 1000000)';
+      if (!v || !/^\d+$/.test(v) || Number(v) > 1_000_000)
+        return '--bootstrap needs a whole number of resamples (0 to 1000000)';
       bootstrap = Number(v);
     } else if (a.startsWith('-')) return `unknown option '${a}'`;
     else if (file === null) file = a;
@@ -65,7 +67,12 @@ function readDatasets(text: string): Dataset[] | string {
     if (d === null || typeof d !== 'object') return `dataset ${i + 1} is not an object`;
     const { id, pH, v, w } = d as Record<string, unknown>;
     // contents are checked by the engine; here only the shape that lets a result name its dataset
-    out.push({ id: typeof id === 'string' || typeof id === 'number' ? String(id) : `#${i + 1}`, pH, v, w } as Dataset);
+    out.push({
+      id: typeof id === 'string' || typeof id === 'number' ? String(id) : `#${i + 1}`,
+      pH,
+      v,
+      w,
+    } as Dataset);
   }
   return out;
 }
@@ -101,12 +108,25 @@ function resultOf(id: string, fit: ProfileFit, bootstrap: number): Record<string
   return out;
 }
 
-function failedResult(id: string, model: CliModel, n: number, code: string, message: string): Record<string, unknown> {
+function failedResult(
+  id: string,
+  model: CliModel,
+  n: number,
+  code: string,
+  message: string,
+): Record<string, unknown> {
   const fitted = model === 'auto' ? 'bell' : model;
   const out: Record<string, unknown> = { id, model: fitted, n, dof: null };
   for (const name of PARAMS[fitted]) out[name] = null;
   out.se = Object.fromEntries(PARAMS[fitted].map((name) => [name, null]));
-  Object.assign(out, { pHopt: null, pHopt_se: null, ssr: null, converged: false, flags: [code], error: message });
+  Object.assign(out, {
+    pHopt: null,
+    pHopt_se: null,
+    ssr: null,
+    converged: false,
+    flags: [code],
+    error: message,
+  });
   return out;
 }
 
@@ -120,7 +140,9 @@ function fitOne(d: Dataset, args: Args): Record<string, unknown> {
       : failedResult(d.id, args.model, n, choice.error.code, choice.error.message);
   }
   const fit = fitProfile(d, { ...options, model: args.model });
-  return fit.ok ? resultOf(d.id, fit.value, args.bootstrap) : failedResult(d.id, args.model, n, fit.error.code, fit.error.message);
+  return fit.ok
+    ? resultOf(d.id, fit.value, args.bootstrap)
+    : failedResult(d.id, args.model, n, fit.error.code, fit.error.message);
 }
 
 export async function run(argv: string[]): Promise<number> {

@@ -369,3 +369,22 @@ export const wellRecords = pgTable(
   },
   (t) => [primaryKey({ columns: [t.readId, t.well] })],
 );
+
+// ---- Review: comments and decisions on a study ----
+
+export const studyEvents = pgTable(
+  'study_events',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    teamId: teamRef(),
+    studyId: uuid()
+      .notNull()
+      .references(() => studies.id, { onDelete: 'cascade' }),
+    authorId: userRef(),
+    /** comment | submit | withdraw | approve | return | unlock */
+    kind: text().notNull(),
+    body: text().notNull().default(''),
+    createdAt: createdAt(),
+  },
+  (t) => [index('study_events_study_idx').on(t.studyId, t.createdAt)],
+);

@@ -44,3 +44,43 @@ export function passwordResetMail(input: { to: string; link: string }): Mail {
     ),
   };
 }
+
+export function reviewRequestMail(input: { to: string[]; author: string; study: string; message: string; link: string }): Mail {
+  return {
+    to: input.to,
+    subject: `Review requested: ${input.study}`,
+    ...withLink(
+      [
+        `${input.author} submitted the study "${input.study}" for your review.`,
+        ...(input.message ? [`Their note: ${input.message}`] : []),
+        'Open the study to check its fits, QC and exclusions, then approve it or return it with comments.',
+      ],
+      input.link,
+      'Open the study',
+    ),
+  };
+}
+
+export function reviewDecisionMail(input: {
+  to: string;
+  reviewer: string;
+  study: string;
+  decision: 'approved' | 'returned' | 'unlocked';
+  comment: string;
+  link: string;
+}): Mail {
+  const verb = { approved: 'approved and locked', returned: 'returned', unlocked: 'unlocked' }[input.decision];
+  return {
+    to: input.to,
+    subject: `Study ${input.decision}: ${input.study}`,
+    ...withLink(
+      [
+        `${input.reviewer} ${verb} the study "${input.study}".`,
+        ...(input.comment ? [`Comment: ${input.comment}`] : []),
+        ...(input.decision === 'approved' ? [] : ['You can edit it again and resubmit it when ready.']),
+      ],
+      input.link,
+      'Open the study',
+    ),
+  };
+}

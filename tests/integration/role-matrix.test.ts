@@ -74,6 +74,14 @@ const rules: Record<string, string> = {
   'GET /api/plate-templates': '401 ok ok ok ok ok',
   'POST /api/plate-templates': '401 403 400 400 400 400',
   'DELETE /api/plate-templates/:id': '401 403 204 204 204 404',
+  // Review steps on the approved study of team A: only unlock fits its status.
+  'POST /api/studies/:id/submit': '401 403 409 409 409 404',
+  'POST /api/studies/:id/withdraw': '401 403 409 409 409 404',
+  'POST /api/studies/:id/approve': '401 403 403 409 409 404',
+  'POST /api/studies/:id/return': '401 403 403 400 400 400',
+  'POST /api/studies/:id/unlock': '401 403 403 403 400 403',
+  'GET /api/studies/:id/history': '401 ok ok ok ok 404',
+  'POST /api/studies/:id/comments': '401 403 400 400 400 400',
 };
 
 /** Routes that destroy their target get a fresh one for every caller. */
