@@ -1,0 +1,96 @@
+// fitProfile: one activity-against-pH profile, one model (or 'auto'), the full report.
+
+import { describeFit } from './describe';
+import { fitModel } from './fit-core';
+import { MODEL_IDS, MODELS, type ModelId } from './models';
+import { prepareProfile, type PhData, type ProfileInput } from './ph-data';
+import { fail, ok, type Result } from './result';
+import type { ProfileFit } from './types';
+
+export interface FitOptions {
+  /** default 'bell' */
+  model?: ModelId;
+  /** profile-likelihood intervals for every fitted parameter and Δ (default true) */
+  profile?: boolean;
+  /** residual-bootstrap resamples for the optimum and the window (default 0 = none) */
+  bootstrap?: number;
+  /** seed of the bootstrap (default 1) */
+  seed?: number;
+  /** when a pKa is not determined, also fit and attach the simpler model (default true) */
+  alternative?: boolean;
+  /** iteration limit of the solver (default 200) */
+  maxIterations?: number;
+}
+
+/** The simpler model a fit tends to when one of its pKa values runs out of the data. */
+function simplerModel(model: ModelId, notDetermined: readonly string[]): ModelId | null {
+  if (model === 'bell') {
+    if (notDetermined.includes('pKa1') && notDetermined.includes('pKa2')) return null;
+    if (notDetermined.includes('pKa2')) return 'acid';
+    if (notDetermined.includes('pKa1')) return 'base';
+  }
+  if (model === 'three' && notDetermined.includes('pKa') && !notDetermined.includes('pKb')) {
+    return notDetermined.includes('pKc') ? 'acid' : 'bell';
+  }
+  return null;
+}
+
+export function checkOptions(options: FitOptions): Result<Required<FitOptions>> {
+  const model = options.model ?? 'bell';
+  if (!MODEL_IDS.includes(model)) {
+    return fail(
+      'unknown_model',
+      `Unknown model '${String(model)}'; expected one of ${MODEL_IDS.join(', ')}.`,
+    );
+  }
+  const bootstrap = options.bootstrap ?? 0;
+  if (!Number.isInteger(bootstrap) || bootstrap < 0 || bootstrap > 1_000_000) {
+    return fail(
+      'bad_option',
+      'The number of bootstrap resamples must be a whole number from 0 to 1,000,000.',
+    );
+  }
+  const seed = options.seed ?? 1;
+  if (!Number.isInteger(seed)) return fail('bad_option', 'The bootstrap seed must be a whole number.');
+  const maxIterations = options.maxIterations ?? 200;
+  if (!Number.isInteger(maxIterations) || maxIterations < 1) {
+    return fail('bad_option', 'The iteration limit must be a positive whole number.');
+  }
+  return ok({
+    model,
+    profile: options.profile ?? true,
+    bootstrap,
+    seed,
+    alternative: options.alternative ?? true,
+    maxIterations,
+  });
+}
+
+/** Fits prepared data (used by fitProfile, chooseModel and the global fit's separate fits). */
+export function fitPrepared(data: PhData, opts: Required<FitOptions>): ProfileFit | null {
+  const model = MODELS[opts.model];
+  const core = fitModel(model, data, { maxIterations: opts.maxIterations });
+  if (!core) return null;
+  const fit = describeFit(model, data, core, opts);
+  if (opts.alternative) {
+    const missing = model.names.filter((name) => fit.parameters[name].status === 'not_determined');
+    const simpler = missing.length > 0 ? simplerModel(model.id, missing) : null;
+    if (simpler) fit.alternative = fitPrepared(data, { ...opts, model: simpler, alternative: false });
+  }
+  return fit;
+}
+
+/**
+ * Fits one model to one profile. Bad input (NaN, empty, length mismatch, fewer points than
+ * parameters, a single pH value, negative weights, unknown model) returns { ok: false, error }.
+ */
+export function fitProfile(input: ProfileInput, options: FitOptions = {}): Result<ProfileFit> {
+  const checked = checkOptions(options);
+  if (!checked.ok) return checked;
+  const opts = checked.value;
+  const prepared = prepareProfile(input, MODELS[opts.model].names.length);
+  if (!prepared.ok) return prepared;
+  const fit = fitPrepared(prepared.value, opts);
+  if (!fit) return fail('bad_start', 'No starting point could be evaluated for this model and data.');
+  return ok(fit);
+}

@@ -1,0 +1,194 @@
+// Levenberg–Marquardt nonlinear least squares (Levenberg 1944; Marquardt 1963) with Marquardt's
+// scaling by the largest diagonal of JᵀJ seen so far (Moré 1978), Nielsen's damping update
+// (Nielsen 1999, IMM-REP-1999-05), MINPACK-style stopping rules and simple box bounds
+// (projected steps; a parameter pinned at a bound by its gradient is held fixed for the step).
+//
+// Minimises SSR(θ) = Σ rᵢ², rᵢ = √wᵢ (yᵢ − f(xᵢ; θ)). Each step solves
+//   (JᵀJ + λ·D) δ = Jᵀr,   J = √w ∂f/∂θ,   D = diag(max over iterations of diag JᵀJ)
+// and is accepted when the gain ratio ρ = (SSR − SSR(θ+δ)) / (2δᵀJᵀr − δᵀJᵀJδ) is positive.
+
+import { dampedCholeskySolve, normalEquations } from './linalg';
+import { scratch } from './scratch';
+
+export type StopReason =
+  'converged-gradient' | 'converged-step' | 'converged-ssr' | 'max-iterations' | 'singular' | 'non-finite';
+
+export interface LsqProblem {
+  readonly n: number;
+  readonly p: number;
+  /**
+   * Fills the weighted residuals r = √w (y − f) and, when J is given, J = √w ∂f/∂θ (row-major n×p).
+   * Returns false when anything is not finite.
+   */
+  evaluate(theta: Float64Array, r: Float64Array, J: Float64Array | null): boolean;
+}
+
+export interface LmOptions {
+  maxIterations?: number;
+  /** relative reduction of SSR, actual and predicted, below which the fit has converged */
+  ftol?: number;
+  /** relative step size below which the fit has converged */
+  xtol?: number;
+  /** cosine between the residual vector and any Jacobian column below which it has converged */
+  gtol?: number;
+  lower?: ArrayLike<number>;
+  upper?: ArrayLike<number>;
+}
+
+export interface LmResult {
+  theta: Float64Array;
+  ssr: number;
+  iterations: number;
+  evaluations: number;
+  stop: StopReason;
+  converged: boolean;
+  /** per parameter: -1 held at its lower bound, +1 at its upper bound, 0 free */
+  atBound: (-1 | 0 | 1)[];
+}
+
+// Tight defaults: the reference minima are matched to 1e-6 relative only with tight rules
+// (reference README: scipy's default tolerances missed 608 of 4,341).
+const DEFAULTS = { maxIterations: 200, ftol: 1e-15, xtol: 1e-11, gtol: 1e-12 };
+
+function clampInto(theta: Float64Array, lower?: ArrayLike<number>, upper?: ArrayLike<number>): void {
+  for (let j = 0; j < theta.length; j++) {
+    if (lower && theta[j] < lower[j]) theta[j] = lower[j];
+    if (upper && theta[j] > upper[j]) theta[j] = upper[j];
+  }
+}
+
+export function levenbergMarquardt(
+  problem: LsqProblem,
+  start: ArrayLike<number>,
+  options: LmOptions = {},
+): LmResult {
+  const { n, p } = problem;
+  const maxIterations = options.maxIterations ?? DEFAULTS.maxIterations;
+  const ftol = options.ftol ?? DEFAULTS.ftol;
+  const xtol = options.xtol ?? DEFAULTS.xtol;
+  const gtol = options.gtol ?? DEFAULTS.gtol;
+  const { lower, upper } = options;
+
+  const theta = Float64Array.from(start);
+  clampInto(theta, lower, upper);
+  // Buffers come from the scratch pool and are used only up to n and p.
+  let r = scratch('lm.r', n);
+  let J = scratch('lm.J', n * p);
+  let rT = scratch('lm.rT', n);
+  let JT = scratch('lm.JT', n * p);
+  const small = scratch('lm.small', 4 * p * p + 8 * p);
+  const A = small.subarray(0, p * p);
+  const As = small.subarray(p * p, 2 * p * p);
+  const work = small.subarray(2 * p * p, 3 * p * p + p);
+  const g = small.subarray(3 * p * p + p, 3 * p * p + 2 * p);
+  const gs = small.subarray(3 * p * p + 2 * p, 3 * p * p + 3 * p);
+  const D = small.subarray(3 * p * p + 3 * p, 3 * p * p + 4 * p);
+  const delta = small.subarray(3 * p * p + 4 * p, 3 * p * p + 5 * p);
+  const trial = small.subarray(3 * p * p + 5 * p, 3 * p * p + 6 * p);
+  const held = small.subarray(3 * p * p + 6 * p, 3 * p * p + 7 * p);
+  let evaluations = 1;
+  const done = (reason: StopReason, ssr: number, iterations: number): LmResult => {
+    let stop = reason;
+    if (stop.startsWith('converged') && ssr > 0) {
+      // a parameter without any influence on the model (a zero Jacobian column) cannot be
+      // estimated: the problem is singular even though the damped steps converged
+      let maxA = 0;
+      for (let j = 0; j < p; j++) maxA = Math.max(maxA, A[j * p + j]);
+      for (let j = 0; j < p; j++) if (!(A[j * p + j] > 1e-28 * maxA)) stop = 'singular';
+    }
+    const atBound: (-1 | 0 | 1)[] = [];
+    for (let j = 0; j < p; j++) {
+      atBound.push(lower && theta[j] <= lower[j] ? -1 : upper && theta[j] >= upper[j] ? 1 : 0);
+    }
+    const converged = stop === 'converged-gradient' || stop === 'converged-step' || stop === 'converged-ssr';
+    return { theta, ssr, iterations, evaluations, stop, converged, atBound };
+  };
+
+  if (!problem.evaluate(theta, r, J)) return done('non-finite', NaN, 0);
+  let ssr = 0;
+  for (let i = 0; i < n; i++) ssr += r[i] * r[i];
+  if (!Number.isFinite(ssr)) return done('non-finite', NaN, 0);
+  normalEquations(J, r, n, p, A, g);
+
+  let maxDiag = 0;
+  for (let j = 0; j < p; j++) {
+    D[j] = Math.max(A[j * p + j], 1e-300);
+    maxDiag = Math.max(maxDiag, A[j * p + j]);
+  }
+  if (!(maxDiag > 0)) return done(ssr === 0 ? 'converged-gradient' : 'singular', ssr, 0);
+  let lambda = 1e-3;
+  let nu = 2;
+
+  for (let it = 1; it <= maxIterations; it++) {
+    if (ssr === 0) return done('converged-gradient', ssr, it - 1);
+    // Projected gradient: a parameter at a bound whose descent direction points outward is held.
+    let gmax = 0;
+    for (let j = 0; j < p; j++) {
+      held[j] =
+        (lower && theta[j] <= lower[j] && g[j] < 0) || (upper && theta[j] >= upper[j] && g[j] > 0) ? 1 : 0;
+      gs[j] = held[j] ? 0 : g[j];
+      const colNorm = Math.sqrt(A[j * p + j]);
+      if (!held[j] && colNorm > 0) gmax = Math.max(gmax, Math.abs(g[j]) / (colNorm * Math.sqrt(ssr)));
+    }
+    for (let j = 0; j < p; j++) {
+      for (let k = 0; k < p; k++) {
+        As[j * p + k] = held[j] || held[k] ? (j === k ? A[j * p + j] || 1 : 0) : A[j * p + k];
+      }
+    }
+    if (gmax <= gtol) return done('converged-gradient', ssr, it - 1);
+
+    // Inner loop: raise λ until a step lowers SSR.
+    for (;;) {
+      if (!dampedCholeskySolve(As, D, lambda, gs, delta, p, work)) {
+        lambda *= nu;
+        nu *= 2;
+        if (!Number.isFinite(lambda) || lambda > 1e30) return done('singular', ssr, it);
+        continue;
+      }
+      for (let j = 0; j < p; j++) trial[j] = theta[j] + delta[j];
+      clampInto(trial, lower, upper);
+      let stepSmall = true;
+      let pred = 0;
+      for (let j = 0; j < p; j++) {
+        delta[j] = trial[j] - theta[j];
+        if (Math.abs(delta[j]) > xtol * (Math.abs(theta[j]) + xtol)) stepSmall = false;
+      }
+      // predicted reduction of SSR for the (possibly clipped) step: 2δᵀg − δᵀAδ
+      for (let j = 0; j < p; j++) {
+        let ad = 0;
+        for (let k = 0; k < p; k++) ad += A[j * p + k] * delta[k];
+        pred += delta[j] * (2 * g[j] - ad);
+      }
+      evaluations++;
+      const finite = problem.evaluate(trial, rT, JT);
+      let ssrT = Infinity;
+      if (finite) {
+        ssrT = 0;
+        for (let i = 0; i < n; i++) ssrT += rT[i] * rT[i];
+        if (!Number.isFinite(ssrT)) ssrT = Infinity;
+      }
+      const actual = ssr - ssrT;
+      const rho = pred > 0 ? actual / pred : -1;
+      if (actual > 0 && rho > 0) {
+        theta.set(trial);
+        ssr = ssrT;
+        [r, rT] = [rT, r];
+        [J, JT] = [JT, J];
+        normalEquations(J, r, n, p, A, g);
+        for (let j = 0; j < p; j++) D[j] = Math.max(D[j], A[j * p + j]);
+        lambda *= Math.max(1 / 3, 1 - Math.pow(2 * rho - 1, 3));
+        nu = 2;
+        if (actual <= ftol * ssrT && pred <= ftol * ssrT && rho <= 2) return done('converged-ssr', ssr, it);
+        if (stepSmall) return done('converged-step', ssr, it);
+        break;
+      }
+      // Rejected: at the precision limit the predicted gain itself is negligible.
+      if (Math.abs(actual) <= ftol * ssr && pred <= ftol * ssr) return done('converged-ssr', ssr, it);
+      if (stepSmall && pred <= 1e-12 * ssr) return done('converged-step', ssr, it);
+      lambda *= nu;
+      nu *= 2;
+      if (!Number.isFinite(lambda) || lambda > 1e30) return done('singular', ssr, it);
+    }
+  }
+  return done('max-iterations', ssr, maxIterations);
+}

@@ -1,0 +1,84 @@
+// The least-squares problem of one pH profile and one model, seen through an affine map
+// θ = c + M·u from the solver's free parameters u to the model's parameters θ. The map expresses,
+// without special cases in the solver: parameters held fixed (a pKa that ran out of the data is
+// held at an effectively infinite distance), the order pKa1 ≤ pKa2 (u holds pKa1 and the
+// non-negative increment Δ) and the linear constraint of a profile-likelihood point.
+
+import type { LsqProblem } from './lm';
+import type { PhModel } from './models';
+import type { PhData } from './ph-data';
+import { scratch } from './scratch';
+
+export interface AffineMap {
+  /** model parameters */
+  p: number;
+  /** free parameters */
+  q: number;
+  c: Float64Array;
+  /** p×q row-major */
+  M: Float64Array;
+}
+
+/** A pKa this far beyond the data has no effect on them at double precision (10^−40 ≪ 10^−16). */
+export const FAR = 40;
+
+export function applyMap(map: AffineMap, u: ArrayLike<number>, theta: Float64Array): void {
+  const { p, q, c, M } = map;
+  for (let j = 0; j < p; j++) {
+    let s = c[j];
+    for (let k = 0; k < q; k++) s += M[j * q + k] * u[k];
+    theta[j] = s;
+  }
+}
+
+export function phProblem(model: PhModel, data: PhData, map: AffineMap | null): LsqProblem {
+  const p = model.names.length;
+  const q = map ? map.q : p;
+  const { n, h, g, y, sw } = data;
+  const buf = scratch('problem', 2 * p + 4);
+  const theta = buf.subarray(0, p);
+  const grad = buf.subarray(p, 2 * p);
+  const k = buf.subarray(2 * p, 2 * p + 4);
+  return {
+    n,
+    p: q,
+    evaluate(u, r, J) {
+      if (map) applyMap(map, u, theta);
+      const th = map ? theta : u;
+      model.constants(th, k);
+      for (let i = 0; i < n; i++) {
+        const f = model.point(th, k, h[i], g[i], J ? grad : null);
+        const ri = sw[i] * (y[i] - f);
+        if (!Number.isFinite(ri)) return false;
+        r[i] = ri;
+        if (!J) continue;
+        const row = i * q;
+        if (map) {
+          for (let k = 0; k < q; k++) {
+            let s = 0;
+            for (let j = 0; j < p; j++) s += grad[j] * map.M[j * q + k];
+            J[row + k] = sw[i] * s;
+          }
+        } else {
+          for (let k = 0; k < p; k++) J[row + k] = sw[i] * grad[k];
+        }
+      }
+      return true;
+    },
+  };
+}
+
+/** Model Jacobian ∂f/∂θ (n×p, unweighted) and fitted values at θ. */
+export function modelJacobian(model: PhModel, data: PhData, theta: ArrayLike<number>) {
+  const p = model.names.length;
+  const J = new Float64Array(data.n * p);
+  const f = new Float64Array(data.n);
+  const grad = new Float64Array(p);
+  const k = new Float64Array(4);
+  model.constants(theta, k);
+  for (let i = 0; i < data.n; i++) {
+    f[i] = model.point(theta, k, data.h[i], data.g[i], grad);
+    for (let j = 0; j < p; j++) J[i * p + j] = grad[j];
+  }
+  return { J, f };
+}

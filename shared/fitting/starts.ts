@@ -1,0 +1,139 @@
+// Starting values that need no guess from the user and survive noise and one-limb data: a grid
+// over the free pKa values (kept in increasing order) from one unit below to one unit above the
+// measured pH range; at each grid point the activity levels, which enter linearly, are solved
+// exactly by weighted linear least squares (the idea of variable projection: Golub & Pereyra
+// 1973). The best grid points, in order of their sum of squares, are the starts.
+
+import type { PhModel } from './models';
+import type { PhData } from './ph-data';
+import { scratch } from './scratch';
+
+export interface GridPoint {
+  theta: number[];
+  ssr: number;
+}
+
+const GRID_STEPS = 8;
+
+/**
+ * Weighted least squares for the m ≤ 3 linear levels given the basis values φ (n×m), solved by
+ * Gaussian elimination on the normal equations of the free levels (fixed levels move to the
+ * right-hand side). Writes the levels into theta and returns the SSR.
+ */
+function solveLevels(
+  data: PhData,
+  phi: Float64Array,
+  m: number,
+  free: readonly boolean[],
+  theta: Float64Array,
+  M: Float64Array,
+): number {
+  const { n, y, w } = data;
+  {
+    const W = m + 1; // augmented rows [A | b]
+    M.fill(0);
+    for (let i = 0; i < n; i++) {
+      let yi = y[i];
+      for (let a = 0; a < m; a++) if (!free[a]) yi -= theta[a] * phi[i * m + a];
+      for (let a = 0; a < m; a++) {
+        if (!free[a]) continue;
+        M[a * W + m] += w[i] * phi[i * m + a] * yi;
+        for (let c = 0; c < m; c++) if (free[c]) M[a * W + c] += w[i] * phi[i * m + a] * phi[i * m + c];
+      }
+    }
+    for (let a = 0; a < m; a++) if (!free[a]) M[a * W + a] = 1; // identity rows keep fixed levels out
+    for (let c = 0; c < m; c++) {
+      if (!free[c]) continue;
+      if (!(Math.abs(M[c * W + c]) > 1e-300)) return Infinity;
+      for (let r = 0; r < m; r++) {
+        if (r === c || !free[r]) continue;
+        const f = M[r * W + c] / M[c * W + c];
+        for (let k = c; k <= m; k++) M[r * W + k] -= f * M[c * W + k];
+      }
+    }
+    for (let c = 0; c < m; c++) if (free[c]) theta[c] = M[c * W + m] / M[c * W + c];
+  }
+  let ssr = 0;
+  for (let i = 0; i < n; i++) {
+    let f = 0;
+    for (let k = 0; k < m; k++) f += theta[k] * phi[i * m + k];
+    const r = y[i] - f;
+    ssr += w[i] * r * r;
+  }
+  return Number.isFinite(ssr) ? ssr : Infinity;
+}
+
+/**
+ * Grid starts, best first. `fixed[j]` holds a parameter's value when it is not free.
+ * Returns at most `keep` points.
+ */
+export function gridStarts(
+  model: PhModel,
+  data: PhData,
+  fixed: readonly (number | null)[],
+  keep = 3,
+): GridPoint[] {
+  const p = model.names.length;
+  const m = model.nLinear;
+  const freePKa: number[] = [];
+  for (let j = m; j < p; j++) if (fixed[j] === null) freePKa.push(j);
+  const freeLevel = Array.from({ length: m }, (_, k) => fixed[k] === null);
+  const lo = data.lo - 1;
+  const hi = data.hi + 1;
+  const step = (hi - lo) / GRID_STEPS;
+  const grid: number[] = [];
+  for (let i = 0; i <= GRID_STEPS; i++) grid.push(lo + i * step);
+  const buf = scratch('grid', p + data.n * m + m + 4 + m * (m + 1));
+  const theta = buf.subarray(0, p);
+  for (let j = 0; j < p; j++) theta[j] = fixed[j] ?? 0;
+  const phi = buf.subarray(p, p + data.n * m);
+  const row = buf.subarray(p + data.n * m, p + data.n * m + m);
+  const k = buf.subarray(p + data.n * m + m, p + data.n * m + m + 4);
+  const work = buf.subarray(p + data.n * m + m + 4, p + data.n * m + m + 4 + m * (m + 1));
+  const best: GridPoint[] = [];
+  let syy = 0;
+  for (let i = 0; i < data.n; i++) syy += data.w[i] * data.y[i] * data.y[i];
+
+  const visit = (depth: number, from: number): void => {
+    if (depth === freePKa.length) {
+      model.constants(theta, k);
+      let ssr: number;
+      if (m === 1 && freeLevel[0]) {
+        // one level in one pass: V = Sφy/Sφφ and SSR = Syy − Sφy²/Sφφ
+        let sxy = 0;
+        let sxx = 0;
+        for (let i = 0; i < data.n; i++) {
+          model.basis(k, data.h[i], data.g[i], row);
+          const wf = data.w[i] * row[0];
+          sxy += wf * data.y[i];
+          sxx += wf * row[0];
+        }
+        theta[0] = sxy / sxx;
+        ssr = sxx > 1e-300 ? Math.max(0, syy - (sxy * sxy) / sxx) : Infinity;
+      } else {
+        for (let i = 0; i < data.n; i++) {
+          model.basis(k, data.h[i], data.g[i], row);
+          for (let c = 0; c < m; c++) phi[i * m + c] = row[c];
+        }
+        ssr = solveLevels(data, phi, m, freeLevel, theta, work);
+      }
+      if (!Number.isFinite(ssr)) return;
+      if (best.length < keep || ssr < best[best.length - 1].ssr) {
+        // insertion into the short sorted list; the array copy happens only for a new best few
+        const entry = { theta: Array.from(theta), ssr };
+        let at = best.length;
+        while (at > 0 && best[at - 1].ssr > ssr) at--;
+        best.splice(at, 0, entry);
+        if (best.length > keep) best.pop();
+      }
+      return;
+    }
+    // pKa values in increasing order; a free pKa is also kept above any fixed one before it
+    for (let g = from; g < grid.length; g++) {
+      theta[freePKa[depth]] = grid[g];
+      visit(depth + 1, g + 1);
+    }
+  };
+  visit(0, 0);
+  return best;
+}

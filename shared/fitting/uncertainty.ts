@@ -1,0 +1,79 @@
+// Standard errors and intervals. Covariance cov = s²(JᵀWJ)⁻¹ with s² = SSR/(n − p), the form
+// NIST StRD certifies and scipy/R report; derived quantities by the delta method,
+// var(g(θ)) ≈ ∇gᵀ·cov·∇g (e.g. Bates & Watts 1988, §2.3 [memory]).
+
+import { invertSymmetric } from './linalg';
+import { studentTQuantile } from './stats/distributions';
+import type { Estimate } from './types';
+import { finiteOrNull } from './result';
+
+/** (JᵀWJ)⁻¹ over the columns `free` of a row-major n×p Jacobian; null when singular. */
+export function inverseNormalMatrix(
+  J: Float64Array,
+  w: Float64Array,
+  n: number,
+  p: number,
+  free: readonly number[],
+): Float64Array | null {
+  const q = free.length;
+  const A = new Float64Array(q * q);
+  for (let i = 0; i < n; i++) {
+    if (!(w[i] > 0)) continue;
+    for (let a = 0; a < q; a++) {
+      const ja = J[i * p + free[a]] * w[i];
+      for (let b = 0; b <= a; b++) A[a * q + b] += ja * J[i * p + free[b]];
+    }
+  }
+  for (let a = 0; a < q; a++) for (let b = 0; b < a; b++) A[b * q + a] = A[a * q + b];
+  return invertSymmetric(A, q);
+}
+
+/** Two-sided 95 % quantile of Student's t. */
+export function t975(dof: number): number | null {
+  return dof > 0 ? studentTQuantile(0.975, dof) : null;
+}
+
+export function estimate(value: number | null, se: number | null, dof: number): Estimate {
+  const v = finiteOrNull(value);
+  const s = finiteOrNull(se);
+  const t = t975(dof);
+  const ci95: [number, number] | null =
+    v !== null && s !== null && t !== null ? [v - t * s, v + t * s] : null;
+  return { value: v, se: s, ci95: ci95 && ci95.every(Number.isFinite) ? ci95 : null };
+}
+
+/** gᵀ·C·g for a gradient over the q free parameters. */
+export function quadraticForm(g: ArrayLike<number>, C: ArrayLike<number>, q: number): number {
+  let s = 0;
+  for (let a = 0; a < q; a++) for (let b = 0; b < q; b++) s += g[a] * C[a * q + b] * g[b];
+  return s;
+}
+
+/**
+ * Delta-method standard error of fn(θ), with ∇fn by central differences over the free
+ * parameters (step ∛ε·max(|θ|, 1)). Null when fn is undefined near θ.
+ */
+export function deltaSE(
+  fn: (theta: Float64Array) => number | null,
+  theta: ArrayLike<number>,
+  free: readonly number[],
+  cov: Float64Array | null,
+): number | null {
+  if (!cov) return null;
+  const q = free.length;
+  const g = new Float64Array(q);
+  const t = Float64Array.from(theta);
+  for (let a = 0; a < q; a++) {
+    const j = free[a];
+    const h = 6e-6 * Math.max(Math.abs(theta[j]), 1);
+    t[j] = theta[j] + h;
+    const up = fn(t);
+    t[j] = theta[j] - h;
+    const down = fn(t);
+    t[j] = theta[j];
+    if (up === null || down === null || !Number.isFinite(up) || !Number.isFinite(down)) return null;
+    g[a] = (up - down) / (2 * h);
+  }
+  const v = quadraticForm(g, cov, q);
+  return v >= 0 && Number.isFinite(v) ? Math.sqrt(v) : null;
+}
