@@ -14,6 +14,7 @@ import { AppError } from './errors';
 import { registerAdminRoutes } from './routes/admin';
 import { registerAssayRoutes } from './routes/assays';
 import { registerAuthRoutes } from './routes/auth';
+import { registerBufferRoutes } from './routes/buffers';
 import { registerEnzymeRoutes } from './routes/enzymes';
 import { registerHealthRoutes } from './routes/health';
 import { registerPlateRoutes } from './routes/plates';
@@ -34,6 +35,7 @@ const routeModules: ((api: Router, ctx: AppContext) => void)[] = [
   registerStudyRoutes,
   registerPlateRoutes,
   registerReviewRoutes,
+  registerBufferRoutes,
 ];
 
 function sessionMiddleware({ pool, config }: AppDeps) {

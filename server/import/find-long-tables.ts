@@ -64,7 +64,7 @@ export function findLongTables(context: DetectContext): Draft[] {
       const content =
         timeColumn >= 0
           ? kineticContent(context, rows, valueColumn, temperatureColumn, cellRef(headerRow, timeColumn))
-          : endpointContent(context, rows, valueColumn);
+          : endpointContent(context, rows, valueColumn, wellColumn);
       const headerText = header[valueColumn];
       drafts.push({
         layout: 'long-table',
@@ -123,14 +123,14 @@ function readTimeCell(
   });
 }
 
-function endpointContent({ grid }: DetectContext, rows: Row[], valueColumn: number): EndpointContent {
+function endpointContent({ grid }: DetectContext, rows: Row[], valueColumn: number, wellColumn: number): EndpointContent {
   const plateFormat = formatHolding(rows.map((r) => r.position));
   const content: EndpointContent = { kind: 'endpoint', plateFormat, wells: {}, flags: {}, raw: {} };
   const seen = new Map<string, number>();
   for (const { row, position } of rows) {
     const name = wellName(position);
     const earlier = seen.get(name);
-    if (earlier !== undefined) duplicateWell(grid.name, name, earlier, row, valueColumn);
+    if (earlier !== undefined) duplicateWell(grid.name, name, earlier, row, wellColumn);
     seen.set(name, row);
   }
   // Canonical order: the wells this table lists, A1 first.

@@ -4,6 +4,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRouteList } from '../../server/app';
 import { mailMessages, plates, plateTemplates, readerFiles, reads } from '../../server/db/schema';
+import { seedBuiltInBuffers } from '../../server/services/buffers/library';
 import { startTestApp, type TestApp } from './helpers/app';
 import { createTeam, createUser } from './helpers/factories';
 import { createPreparation, createStudyWorld } from './helpers/records';
@@ -82,6 +83,11 @@ const rules: Record<string, string> = {
   'POST /api/studies/:id/unlock': '401 403 403 403 400 403',
   'GET /api/studies/:id/history': '401 ok ok ok ok 404',
   'POST /api/studies/:id/comments': '401 403 400 400 400 400',
+  'GET /api/buffers': '401 ok ok ok ok ok',
+  'GET /api/buffers/:id': '401 ok ok ok ok ok',
+  'POST /api/buffers': '401 403 403 403 400 403',
+  'PUT /api/buffers/:id': '401 403 403 403 400 403',
+  'DELETE /api/buffers/:id': '401 403 403 403 403 403',
 };
 
 /** Routes that destroy their target get a fresh one for every caller. */
@@ -139,7 +145,8 @@ beforeAll(async () => {
     .insert(reads)
     .values({ teamId: teamA.id, plateId: plate.id, fileId: file.id, blockIndex: 0, kind: 'endpoint', label: 'r', sheet: 's', location: 'A1:M9' })
     .returning();
-  Object.assign(ids, { plates: plate.id, 'reader-files': file.id, reads: read.id });
+  Object.assign(ids, { plates: plate.id, 'reader-files': file.id, reads: read.id, buffers: 'tris' });
+  await seedBuiltInBuffers(t.db);
 });
 
 afterAll(() => t?.close());

@@ -5,6 +5,7 @@ import { hashPassword } from '../../auth/passwords';
 import type { Db } from '../client';
 import { teamMembers, teams, users } from '../schema';
 import { writeAudit } from '../../services/audit/write-audit';
+import { seedBuiltInBuffers } from '../../services/buffers/library';
 import { demoPassword, demoPeople, demoTeam } from './demo-people';
 
 export type SeedStep = { name: string; run: (db: Db) => Promise<void> };
@@ -31,7 +32,10 @@ async function seedPeopleAndTeam(db: Db) {
   });
 }
 
-export const seedSteps: SeedStep[] = [{ name: 'people and team', run: seedPeopleAndTeam }];
+export const seedSteps: SeedStep[] = [
+  { name: 'people and team', run: seedPeopleAndTeam },
+  { name: 'buffer library', run: seedBuiltInBuffers },
+];
 
 export async function seedDemo(db: Db, log: (line: string) => void = () => {}) {
   for (const step of seedSteps) {
