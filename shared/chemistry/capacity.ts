@@ -5,7 +5,7 @@
 import { capacityOfState, environment, prepare, stateAt, type Conditions } from './equilibrium';
 import type { BufferSystem } from './library';
 import { computeRecipe, type RecipeMethod } from './recipe';
-import { ChemFailure, guard, type ChemResult } from './result';
+import { ChemFailure, guardInput, type ChemResult } from './result';
 import { resolveSystem } from './solution';
 import { checkAmount, checkPH, checkRange } from './validate';
 
@@ -95,7 +95,7 @@ function point(
 
 /** β of a buffer made up at `pH` (the recipe's counter-ions and ionic strength). */
 export function bufferCapacity(input: CapacityInput): ChemResult<CapacityPoint> {
-  return guard(() => capacityAt(input));
+  return guardInput(input, () => capacityAt(input));
 }
 
 export interface CapacityCurveInput extends Omit<CapacityInput, 'pH'> {
@@ -106,7 +106,7 @@ export interface CapacityCurveInput extends Omit<CapacityInput, 'pH'> {
 
 /** β against pH, each point a buffer made up at that pH. */
 export function capacityCurve(input: CapacityCurveInput): ChemResult<CapacityPoint[]> {
-  return guard(() => {
+  return guardInput(input, () => {
     const from = checkPH(input.pHFrom, 'Start pH');
     const to = checkPH(input.pHTo, 'End pH');
     const step = checkRange(input.step ?? 0.1, 'pH step', 0.001, 14);

@@ -7,10 +7,16 @@ import { A_TABLE_MAX_C, activityBracket, apparentPKa, debyeHuckelA, type Activit
 import type { BufferSystem } from './library';
 import { ChemFailure } from './result';
 import { brent } from './roots';
-import { resolveComposition, strongIonSums, type Composition, type ResolvedBuffer } from './solution';
+import {
+  resolveComposition,
+  resolveSystem,
+  strongIonSums,
+  type Composition,
+  type ResolvedBuffer,
+} from './solution';
 import { protonVariance, speciesFractions } from './speciation';
 import { chosenTemperatureModel, pKaAtTemperature, pKw, type TemperatureModel } from './temperature';
-import { checkTemperature } from './validate';
+import { checkChoice, checkTemperature } from './validate';
 
 export interface Conditions {
   temperatureC: number;
@@ -35,10 +41,13 @@ export interface Environment {
 
 export function environment(c: Conditions): Environment {
   const celsius = checkTemperature(c.temperatureC);
+  const library = c.library ?? [];
+  if (!Array.isArray(library))
+    throw new ChemFailure('invalid-input', 'The extra library must be a list of buffer systems.');
+  for (const system of library) resolveSystem(system);
   const model = c.activityModel ?? 'davies';
-  if (!['davies', 'extended-debye-huckel', 'ideal'].includes(model)) {
-    throw new ChemFailure('invalid-input', `Unknown activity model "${String(model)}".`);
-  }
+  checkChoice(model, 'Activity model', ['davies', 'extended-debye-huckel', 'ideal']);
+  checkChoice(c.temperatureModel, 'Temperature model', ['goldberg', 'roy', 'slope']);
   const warnings = new Set<string>();
   if (celsius > A_TABLE_MAX_C && model !== 'ideal') {
     warnings.add(`The Debye–Hückel A table ends at ${A_TABLE_MAX_C} °C; A was extrapolated.`);
@@ -49,7 +58,7 @@ export function environment(c: Conditions): Environment {
     A: debyeHuckelA(celsius),
     pKw: pKw(celsius),
     temperatureModel: c.temperatureModel,
-    library: c.library ?? [],
+    library,
     warnings,
   };
 }

@@ -5,6 +5,7 @@
 import type { BufferForm, BufferSystem, Titrant } from './library';
 import { ChemFailure } from './result';
 import type { StrongIon } from './solution';
+import { shown } from './validate';
 
 export function formCharge(form: BufferForm): number {
   const c = form.counterIons;
@@ -27,11 +28,14 @@ export const TITRANT_ION: Record<Titrant, { ion: StrongIon; charge: 1 | -1 }> = 
   HCl: { ion: 'Cl', charge: -1 },
 };
 
-export function findForm(system: BufferSystem, id: string): BufferForm {
+export function findForm(system: BufferSystem, id: unknown): BufferForm {
   const form = system.forms.find((f) => f.id === id);
   if (!form) {
     const known = system.forms.map((f) => f.id).join(', ');
-    throw new ChemFailure('unknown-form', `${system.name} has no form "${id}"; its forms are: ${known}.`);
+    throw new ChemFailure(
+      'unknown-form',
+      `${system.name} has no form ${shown(id)}; its forms are: ${known}.`,
+    );
   }
   return form;
 }

@@ -59,7 +59,7 @@ function parseGroup(text: string, whole: string): Record<string, number> {
         throw new ChemFailure('invalid-input', `Formula "${whole}": unbalanced ")".`);
       add(stack[stack.length - 1], inner, n);
     } else {
-      if (!(m[1] in ATOMIC_WEIGHTS))
+      if (!Object.hasOwn(ATOMIC_WEIGHTS, m[1]))
         throw new ChemFailure('invalid-input', `Formula "${whole}": unknown element ${m[1]}.`);
       add(stack[stack.length - 1], { [m[1]]: 1 }, n);
     }
@@ -82,5 +82,11 @@ export function formulaWeight(formula: string): number {
 export function molarMass(
   formula: string,
 ): ChemResult<{ formula: string; molarMass: number; elements: Record<string, number> }> {
+  if (typeof formula !== 'string' || formula.length === 0 || formula.length > 200) {
+    return {
+      ok: false,
+      error: { code: 'invalid-input', message: 'Give a chemical formula such as "Na2HPO4·7H2O".' },
+    };
+  }
   return guard(() => ({ formula, molarMass: formulaWeight(formula), elements: parseFormula(formula) }));
 }

@@ -6,10 +6,10 @@ import { findForm } from './forms';
 import { formulaWeight } from './formula';
 import type { BufferSystem, Salt } from './library';
 import { brent } from './roots';
-import { ChemFailure, guard, type ChemResult } from './result';
+import { ChemFailure, guardInput, type ChemResult } from './result';
 import { combine, resolveComposition, resolveSystem, type Composition, type StrongIon } from './solution';
 import { summarise, type SolutionResult } from './solve';
-import { checkAmount, checkTemperature } from './validate';
+import { checkAmount, checkChoice, checkTemperature, shown } from './validate';
 
 export interface MixPart {
   label: string;
@@ -30,7 +30,13 @@ export interface MixResult extends SolutionResult {
 export function mixComposition(parts: MixPart[]): { composition: Composition; totalVolume: number } {
   if (!Array.isArray(parts) || parts.length === 0)
     throw new ChemFailure('invalid-input', 'Give at least one solution to mix.');
-  const volumes = parts.map((p) => checkAmount(p.volume, `Volume of ${p.label}`));
+  for (const p of parts) {
+    if (typeof p !== 'object' || p === null)
+      throw new ChemFailure('invalid-input', 'Each part needs a composition and a volume.');
+  }
+  const volumes = parts.map((p) =>
+    checkAmount(p.volume, `Volume of ${typeof p.label === 'string' ? p.label : 'a part'}`),
+  );
   const total = volumes.reduce((a, b) => a + b, 0);
   if (total <= 0) throw new ChemFailure('invalid-input', 'The total volume must be greater than zero.');
   const composition = combine(
@@ -41,10 +47,10 @@ export function mixComposition(parts: MixPart[]): { composition: Composition; to
 
 /** pH of a mixture by its charge balance (volumes assumed additive). */
 export function mixSolutions(input: MixInput): ChemResult<MixResult> {
-  return guard(() => {
+  return guardInput(input, () => {
     const env = environment(input);
-    for (const p of input.parts ?? []) resolveComposition(p.composition, env.library);
     const { composition, totalVolume } = mixComposition(input.parts);
+    for (const p of input.parts) resolveComposition(p.composition, env.library);
     const state = solveState(prepare(composition, env));
     return { ...summarise(state, env.celsius, env.warnings), totalVolume, composition };
   });
@@ -65,7 +71,7 @@ export interface ShiftResult {
 
 /** The pH a solution reads at `toC` when it reads `pHFrom` at `fromC` (same totals). */
 export function temperatureShift(input: ShiftInput): ChemResult<ShiftResult> {
-  return guard(() => {
+  return guardInput(input, () => {
     const from = environment({
       ...input,
       temperatureC: checkTemperature(input.fromC, 'Make-up temperature'),
@@ -95,12 +101,25 @@ export function solutionFromIngredients(input: {
   ingredients: Ingredient[];
   library?: readonly BufferSystem[];
 }): ChemResult<Composition> {
-  return guard(() => {
+  return guardInput(input, () => {
     const V = checkAmount(input.volume, 'Volume', true);
+    if (!Array.isArray(input.ingredients))
+      throw new ChemFailure('invalid-input', 'Give a list of ingredients.');
     const parts = input.ingredients.map((ing): Composition => {
+      if (typeof ing !== 'object' || ing === null) {
+        throw new ChemFailure(
+          'invalid-input',
+          'Each ingredient is a form with grams or moles, or a reagent with moles.',
+        );
+      }
       if ('reagent' in ing) {
+        if (!Object.hasOwn(REAGENT_IONS, ing.reagent)) {
+          throw new ChemFailure(
+            'invalid-input',
+            `Unknown reagent ${shown(ing.reagent)}; use NaOH, KOH, HCl, NaCl or KCl.`,
+          );
+        }
         const ions = REAGENT_IONS[ing.reagent];
-        if (!ions) throw new ChemFailure('invalid-input', `Unknown reagent "${String(ing.reagent)}".`);
         const n = checkAmount(ing.moles, `Amount of ${ing.reagent}`);
         return {
           buffers: [],
@@ -144,10 +163,10 @@ export interface SaltResult {
 
 /** Salt to add to an existing solution so that its self-consistent I reaches the target. */
 export function saltForIonicStrength(input: SaltInput): ChemResult<SaltResult> {
-  return guard(() => {
+  return guardInput(input, () => {
     const env = environment(input);
     const target = checkAmount(input.targetIonicStrength, 'Target ionic strength', true);
-    const salt: Salt = input.salt ?? 'NaCl';
+    const salt: Salt = checkChoice(input.salt, 'Salt', ['NaCl', 'KCl']) ?? 'NaCl';
     const cation: StrongIon = salt === 'NaCl' ? 'Na' : 'K';
     const withSalt = (c: number): Composition =>
       combine([

@@ -2,7 +2,7 @@
 // speciation at a pH. Also the library listing and validation of lab-added systems.
 import { environment, systemPKas, apparentPKas, type Conditions } from './equilibrium';
 import { bufferLibrary, bufferSystemSchema, type BufferSystem } from './library';
-import { ChemFailure, fail, guard, ok, type ChemResult } from './result';
+import { ChemFailure, fail, guardInput, ok, type ChemResult } from './result';
 import { resolveSystem } from './solution';
 import { speciesFractions } from './speciation';
 import { chosenTemperatureModel, type TemperatureModel } from './temperature';
@@ -31,7 +31,7 @@ export interface StepProperties {
 export function bufferPKas(
   input: SystemConditions,
 ): ChemResult<{ systemId: string; systemName: string; steps: StepProperties[]; warnings: string[] }> {
-  return guard(() => {
+  return guardInput(input, () => {
     const env = environment(input);
     const system = resolveSystem(input.system, env.library);
     const I = checkAmount(input.ionicStrength ?? 0, 'Ionic strength');
@@ -53,7 +53,7 @@ export function bufferPKas(
 
 /** Fractions of each protonation state (most protonated first) from pKa values at a pH. */
 export function speciate(input: { pKas: number[]; pH: number }): ChemResult<number[]> {
-  return guard(() => {
+  return guardInput(input, () => {
     const pH = checkPH(input.pH);
     if (!Array.isArray(input.pKas) || input.pKas.length === 0 || input.pKas.length > 6) {
       throw new ChemFailure('invalid-input', 'Give one to six pKa values.');
@@ -67,7 +67,7 @@ export function speciate(input: { pKas: number[]; pH: number }): ChemResult<numb
 export function speciateSystem(
   input: SystemConditions & { pH: number },
 ): ChemResult<{ pKapp: number[]; species: { charge: number; fraction: number }[] }> {
-  return guard(() => {
+  return guardInput(input, () => {
     const env = environment(input);
     const system = resolveSystem(input.system, env.library);
     const pH = checkPH(input.pH);

@@ -91,7 +91,8 @@ export function titrationPlan(
       : closestForm(system, S / C);
   const q = formCharge(start);
   const perLitre = S - C * q;
-  let titrant: Titrant = input.titrant ?? preset?.titrant ?? (perLitre >= 0 ? 'NaOH' : 'HCl');
+  const presetTitrant = preset && preset.startFormId === start.id ? preset.titrant : undefined;
+  let titrant: Titrant = input.titrant ?? presetTitrant ?? (perLitre >= 0 ? 'NaOH' : 'HCl');
   if (Math.sign(TITRANT_ION[titrant].charge) !== Math.sign(perLitre) && perLitre !== 0) {
     if (input.titrant) {
       throw new ChemFailure(

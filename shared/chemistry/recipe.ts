@@ -12,16 +12,16 @@ import { checkVolumes, saltComponent, withVolumes } from './recipe-components';
 import { mixPlan, nearestStep, titrationPlan, type Plan } from './recipe-plans';
 import { recipeCautions, recipeSteps } from './recipe-steps';
 import type { Recipe, RecipeInput, RecipeMethod } from './recipe-types';
-import { ChemFailure, guard, type ChemResult } from './result';
+import { ChemFailure, guardInput, type ChemResult } from './result';
 import { resolveSystem, type StrongIon } from './solution';
-import { checkAmount, checkPH } from './validate';
+import { checkAmount, checkChoice, checkPH } from './validate';
 
 export type { Recipe, RecipeComponent, RecipeInput, RecipeMethod } from './recipe-types';
 
 const SALT_ION: Record<Salt, StrongIon> = { NaCl: 'Na', KCl: 'K' };
 
 export function makeRecipe(input: RecipeInput): ChemResult<Recipe> {
-  return guard(() => computeRecipe(input));
+  return guardInput(input, () => computeRecipe(input));
 }
 
 export function computeRecipe(input: RecipeInput): Recipe {
@@ -40,6 +40,15 @@ export function computeRecipe(input: RecipeInput): Recipe {
       'invalid-input',
       'Give either a salt concentration or a target ionic strength, not both.',
     );
+  }
+  checkChoice(input.method, 'Method', ['mix', 'titrate']);
+  checkChoice(input.titrant, 'Titrant', ['NaOH', 'KOH', 'HCl']);
+  checkChoice(input.salt, 'Salt', ['NaCl', 'KCl']);
+  if (input.forms !== undefined && (!Array.isArray(input.forms) || input.forms.length !== 2)) {
+    throw new ChemFailure('invalid-input', 'Forms to mix are a pair: [acid form id, base form id].');
+  }
+  if (input.stockConcs !== undefined && (typeof input.stockConcs !== 'object' || input.stockConcs === null)) {
+    throw new ChemFailure('invalid-input', 'Stock concentrations are given by form id, e.g. { "hepes": 1 }.');
   }
   const salt: Salt = input.salt ?? (system.forms.some((f) => f.counterIons.K > 0) ? 'KCl' : 'NaCl');
   const pKa = systemPKas(system, env);

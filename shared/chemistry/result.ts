@@ -45,7 +45,15 @@ export function guard<T>(compute: () => T): ChemResult<T> {
     return ok(compute());
   } catch (error) {
     if (error instanceof ChemFailure) return fail(error.code, error.message);
-    const message = error instanceof Error ? error.message : String(error);
+    const message = error instanceof Error ? error.message : 'unknown error';
     return fail('internal-error', `The calculation failed unexpectedly: ${message}`);
   }
+}
+
+/** `guard` for a public entry point whose argument must be an object of named inputs. */
+export function guardInput<T>(input: unknown, compute: () => T): ChemResult<T> {
+  if (typeof input !== 'object' || input === null || Array.isArray(input)) {
+    return fail('invalid-input', 'Expected an object of named inputs.');
+  }
+  return guard(compute);
 }

@@ -9,7 +9,7 @@ import { bufferLibrary, type BufferSystem, type Salt } from './library';
 import { mixComposition, type MixPart } from './mixing';
 import { computeRecipe, type Recipe, type RecipeMethod } from './recipe';
 import { LARGE_DPKA_DT, SAFETY_CAUTION } from './recipe-steps';
-import { ChemFailure, guard, type ChemResult } from './result';
+import { ChemFailure, guardInput, type ChemResult } from './result';
 import type { ActivityModel } from './activity';
 import { resolveComposition, resolveSystem } from './solution';
 import { checkAmount, checkPH, checkRange, checkTemperature } from './validate';
@@ -73,7 +73,7 @@ export interface Series {
 }
 
 export function designSeries(input: SeriesInput): ChemResult<Series> {
-  return guard(() => design(input));
+  return guardInput(input, () => design(input));
 }
 
 function design(input: SeriesInput): Series {
@@ -88,9 +88,18 @@ function design(input: SeriesInput): Series {
   checkAmount(input.volume, 'Volume', true);
   const weakBelow = checkRange(input.weakRelativeCapacity ?? 0.5, 'Weak-capacity fraction', 0, 1);
   const driftLimit = checkAmount(input.driftLimit ?? 0.05, 'Drift limit');
+  if (
+    input.well !== undefined &&
+    (typeof input.well !== 'object' || input.well === null || !Array.isArray(input.well.additions))
+  ) {
+    throw new ChemFailure('invalid-input', 'The well needs a buffer volume and a list of additions.');
+  }
+  if (input.library !== undefined && !Array.isArray(input.library)) {
+    throw new ChemFailure('invalid-input', 'The extra library must be a list of buffer systems.');
+  }
   const library = input.library ?? [];
   const systems = input.systems
-    ? input.systems.map((id) => resolveSystem(id, library))
+    ? (Array.isArray(input.systems) ? input.systems : [input.systems]).map((id) => resolveSystem(id, library))
     : [...library, ...bufferLibrary.filter((s) => s.designerDefault)];
   const env = environment({ temperatureC: assayT, activityModel: input.activityModel, library });
   const Iguess = input.targetIonicStrength ?? C / 2;

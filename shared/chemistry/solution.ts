@@ -2,9 +2,9 @@
 // (total concentration over all protonation states) and strong ions (counter-ions, titrant ions,
 // added salt). All concentrations in mol/L. A composition is plain JSON, so a recipe's result can
 // be fed to mixing, titration and temperature-shift calculations.
-import { findBufferSystem, type BufferSystem } from './library';
+import { bufferSystemSchema, findBufferSystem, type BufferSystem } from './library';
 import { ChemFailure } from './result';
-import { checkAmount } from './validate';
+import { checkAmount, shown } from './validate';
 
 export const STRONG_ION_CHARGE = { Na: 1, K: 1, Cl: -1, Mg: 2, Ca: 2, SO4: -2, NO3: -1 } as const;
 export type StrongIon = keyof typeof STRONG_ION_CHARGE;
@@ -21,11 +21,28 @@ export interface ResolvedBuffer {
   total: number;
 }
 
+const checked = new WeakMap<object, BufferSystem>();
+
+/** A library system by name, or an inline (lab-added) system, validated once with the schema. */
 export function resolveSystem(
   ref: string | BufferSystem,
   library: readonly BufferSystem[] = [],
 ): BufferSystem {
-  if (typeof ref !== 'string') return ref;
+  if (typeof ref === 'object' && ref !== null) {
+    const known = checked.get(ref);
+    if (known) return known;
+    const parsed = bufferSystemSchema.safeParse(ref);
+    if (!parsed.success) {
+      throw new ChemFailure(
+        'invalid-input',
+        'The buffer system given inline is not valid (see bufferSystemSchema).',
+      );
+    }
+    // defaults filled in; the parsed copy is cached for this object
+    checked.set(ref, parsed.data);
+    return parsed.data;
+  }
+  if (typeof ref !== 'string') throw new ChemFailure('invalid-input', 'Name a buffer system (e.g. "hepes").');
   const system = findBufferSystem(ref, library);
   if (!system) {
     throw new ChemFailure(
@@ -41,7 +58,7 @@ export function resolveComposition(c: Composition, library: readonly BufferSyste
     throw new ChemFailure('invalid-input', 'A solution needs "buffers" (a list) and "ions" (an object).');
   }
   for (const [ion, conc] of Object.entries(c.ions)) {
-    if (!(ion in STRONG_ION_CHARGE)) {
+    if (!Object.hasOwn(STRONG_ION_CHARGE, ion)) {
       throw new ChemFailure(
         'invalid-input',
         `Unknown ion "${ion}"; use ${Object.keys(STRONG_ION_CHARGE).join(', ')}.`,
@@ -49,10 +66,14 @@ export function resolveComposition(c: Composition, library: readonly BufferSyste
     }
     checkAmount(conc, `Concentration of ${ion}`);
   }
-  return c.buffers.map((b) => ({
-    system: resolveSystem(b.systemId, library),
-    total: checkAmount(b.total, `Concentration of ${b.systemId}`),
-  }));
+  return c.buffers.map((b) => {
+    if (typeof b !== 'object' || b === null)
+      throw new ChemFailure('invalid-input', 'Each buffer needs a systemId and a total.');
+    return {
+      system: resolveSystem(b.systemId, library),
+      total: checkAmount(b.total, `Concentration of ${shown(b.systemId)}`),
+    };
+  });
 }
 
 /** Σ c·z and ½ Σ c·z² of the strong ions. */

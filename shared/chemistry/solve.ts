@@ -8,7 +8,7 @@ import {
   type Conditions,
   type SolutionState,
 } from './equilibrium';
-import { guard, type ChemResult } from './result';
+import { guardInput, type ChemResult } from './result';
 import type { Composition } from './solution';
 import { checkAmount } from './validate';
 
@@ -74,5 +74,5 @@ export function computeSolution(input: SolutionInput): SolutionResult {
 
 /** pH, ionic strength, speciation and capacity of a solution from its totals (charge balance). */
 export function solutionPH(input: SolutionInput): ChemResult<SolutionResult> {
-  return guard(() => computeSolution(input));
+  return guardInput(input, () => computeSolution(input));
 }

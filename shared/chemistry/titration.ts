@@ -4,9 +4,9 @@
 import { environment, prepare, solveState, type Conditions } from './equilibrium';
 import { TITRANT_ION } from './forms';
 import type { Titrant } from './library';
-import { ChemFailure, guard, type ChemResult } from './result';
+import { ChemFailure, guardInput, type ChemResult } from './result';
 import { combine, resolveComposition, type Composition } from './solution';
-import { checkAmount } from './validate';
+import { checkAmount, shown } from './validate';
 
 export interface AdditionInput extends Conditions {
   composition: Composition;
@@ -52,13 +52,13 @@ export function afterAddition(
 
 function checkReagent(reagent: unknown): Titrant {
   if (reagent !== 'NaOH' && reagent !== 'KOH' && reagent !== 'HCl') {
-    throw new ChemFailure('invalid-input', `Reagent must be NaOH, KOH or HCl (got ${String(reagent)}).`);
+    throw new ChemFailure('invalid-input', `Reagent must be NaOH, KOH or HCl (got ${shown(reagent)}).`);
   }
   return reagent;
 }
 
 export function addStrongAcidOrBase(input: AdditionInput): ChemResult<AdditionResult> {
-  return guard(() => {
+  return guardInput(input, () => {
     const env = environment(input);
     const reagent = checkReagent(input.reagent);
     const V = checkAmount(input.volume, 'Volume', true);
@@ -103,7 +103,7 @@ export interface TitrationPoint {
 
 /** pH against added strong acid or base. */
 export function titrationCurve(input: TitrationInput): ChemResult<TitrationPoint[]> {
-  return guard(() => {
+  return guardInput(input, () => {
     const env = environment(input);
     const titrant = checkReagent(input.titrant);
     const V = checkAmount(input.volume, 'Volume', true);

@@ -7,9 +7,17 @@ export const PH_MAX = 14;
 export const TEMP_MIN_C = 0;
 export const TEMP_MAX_C = 100;
 
+/** A short, never-throwing description of a bad value for a message. */
+export function shown(value: unknown): string {
+  if (typeof value === 'number' || typeof value === 'boolean') return String(value);
+  if (typeof value === 'string') return JSON.stringify(value.slice(0, 40));
+  if (value === null || value === undefined) return String(value);
+  return Array.isArray(value) ? 'a list' : `a ${typeof value}`;
+}
+
 function finite(value: unknown, what: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new ChemFailure('invalid-input', `${what} must be a finite number (got ${String(value)}).`);
+    throw new ChemFailure('invalid-input', `${what} must be a finite number (got ${shown(value)}).`);
   }
   return value;
 }
@@ -45,4 +53,20 @@ export function checkRange(value: unknown, what: string, min: number, max: numbe
   const x = finite(value, what);
   if (x < min || x > max) throw new ChemFailure('invalid-input', `${what} ${x} is outside ${min}–${max}.`);
   return x;
+}
+
+/** One of the allowed words, or undefined when not given. */
+export function checkChoice<T extends string>(
+  value: unknown,
+  what: string,
+  allowed: readonly T[],
+): T | undefined {
+  if (value === undefined) return undefined;
+  if (typeof value !== 'string' || !allowed.includes(value as T)) {
+    throw new ChemFailure(
+      'invalid-input',
+      `${what} must be one of ${allowed.join(', ')} (got ${shown(value)}).`,
+    );
+  }
+  return value as T;
 }

@@ -52,7 +52,7 @@ export interface IonExtras {
   note?: string;
 }
 
-const round2 = (x: number) => Math.round(x * 100) / 100;
+const round4 = (x: number) => Math.round(x * 10000) / 10000;
 
 export function ion(r: TableRow, extras: IonExtras = {}): Ionization {
   return {
@@ -65,7 +65,7 @@ export function ion(r: TableRow, extras: IonExtras = {}): Ionization {
     temperatureModel: extras.useRoy ? 'roy' : 'goldberg',
     roy: extras.roy ?? null,
     publishedPoints: extras.published ?? [],
-    usefulRange: [round2(r.pKa25 - 1), round2(r.pKa25 + 1)],
+    usefulRange: [round4(r.pKa25 - 1), round4(r.pKa25 + 1)],
     sources: {
       row: r.row,
       pKa25: r.pKaSource,
