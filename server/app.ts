@@ -14,6 +14,7 @@ import { AppError } from './errors';
 import { registerAdminRoutes } from './routes/admin';
 import { registerAssayRoutes } from './routes/assays';
 import { registerAuthRoutes } from './routes/auth';
+import { registerBufferSeriesRoutes } from './routes/buffer-series';
 import { registerBufferRoutes } from './routes/buffers';
 import { registerEnzymeRoutes } from './routes/enzymes';
 import { registerHealthRoutes } from './routes/health';
@@ -36,6 +37,7 @@ const routeModules: ((api: Router, ctx: AppContext) => void)[] = [
   registerPlateRoutes,
   registerReviewRoutes,
   registerBufferRoutes,
+  registerBufferSeriesRoutes,
 ];
 
 function sessionMiddleware({ pool, config }: AppDeps) {

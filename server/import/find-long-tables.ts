@@ -123,7 +123,12 @@ function readTimeCell(
   });
 }
 
-function endpointContent({ grid }: DetectContext, rows: Row[], valueColumn: number, wellColumn: number): EndpointContent {
+function endpointContent(
+  { grid }: DetectContext,
+  rows: Row[],
+  valueColumn: number,
+  wellColumn: number,
+): EndpointContent {
   const plateFormat = formatHolding(rows.map((r) => r.position));
   const content: EndpointContent = { kind: 'endpoint', plateFormat, wells: {}, flags: {}, raw: {} };
   const seen = new Map<string, number>();

@@ -3,7 +3,8 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRouteList } from '../../server/app';
-import { mailMessages, plates, plateTemplates, readerFiles, reads } from '../../server/db/schema';
+import { eq } from 'drizzle-orm';
+import { bufferSeries, mailMessages, plates, plateTemplates, readerFiles, reads, studies } from '../../server/db/schema';
 import { seedBuiltInBuffers } from '../../server/services/buffers/library';
 import { startTestApp, type TestApp } from './helpers/app';
 import { createTeam, createUser } from './helpers/factories';
@@ -88,6 +89,13 @@ const rules: Record<string, string> = {
   'POST /api/buffers': '401 403 403 403 400 403',
   'PUT /api/buffers/:id': '401 403 403 403 400 403',
   'DELETE /api/buffers/:id': '401 403 403 403 403 403',
+  'POST /api/buffer-series/design': '401 400 400 400 400 400',
+  'GET /api/buffer-series': '401 ok ok ok ok ok',
+  'POST /api/buffer-series': '401 403 400 400 400 400',
+  'GET /api/buffer-series/:id': '401 ok ok ok ok 404',
+  'PATCH /api/buffer-series/:id': '401 403 400 400 400 400',
+  'DELETE /api/buffer-series/:id': '401 403 409 409 409 404',
+  'GET /api/buffer-series/:id/recipes.xlsx': '401 ok ok ok ok 404',
 };
 
 /** Routes that destroy their target get a fresh one for every caller. */
@@ -133,6 +141,12 @@ beforeAll(async () => {
     assays: world.assay.id,
     studies: world.study.id,
   });
+  const [series] = await t.db
+    .insert(bufferSeries)
+    .values({ teamId: teamA.id, name: 'S', input: { volumeMl: 10 }, design: { points: [], cautions: [], warnings: [], overridden: [], makeTemperatureC: 25, assayTemperatureC: 37 }, createdBy: people.scientist.id })
+    .returning();
+  await t.db.update(studies).set({ bufferSeriesId: series.id }).where(eq(studies.id, world.study.id));
+  ids['buffer-series'] = series.id;
   const [plate] = await t.db
     .insert(plates)
     .values({ teamId: teamA.id, studyId: world.study.id, name: 'P', format: 96, map: { wells: {} }, createdBy: people.scientist.id })
