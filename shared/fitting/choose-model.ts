@@ -115,7 +115,10 @@ export function chooseModel(
       if (test.pValue !== null && test.pValue < alpha) significant.push({ fit, test });
     }
     if (significant.length === 0) break;
-    significant.sort((a, b) => (a.fit.aicc ?? Infinity) - (b.fit.aicc ?? Infinity));
+    // one step at a time: the smallest significant extension first, AICc between equals
+    significant.sort(
+      (a, b) => a.fit.nFitted - b.fit.nFitted || (a.fit.aicc ?? Infinity) - (b.fit.aicc ?? Infinity),
+    );
     const next = significant[0];
     reason = `${next.fit.model} improves significantly on ${current.model} (F = ${next.test.F?.toPrecision(3)}, p = ${next.test.pValue?.toPrecision(2)}).`;
     current = next.fit;

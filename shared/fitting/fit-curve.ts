@@ -24,7 +24,7 @@ export interface CurveFitOptions {
   upper?: readonly number[];
   /** finite differences when the model has no gradient (default 'central') */
   difference?: Difference;
-  /** also try scaled copies of the first start and compare (default: only when the first fails) */
+  /** scaled copies of the first start: true always, false never, default only when the first fails */
   probe?: boolean;
   maxIterations?: number;
 }
@@ -106,7 +106,7 @@ function fitCurveUnguarded(
     start: s,
     lm: levenbergMarquardt(problem, s, lmOptions),
   }));
-  if (options.probe || !runs[0].lm.converged) {
+  if (options.probe === true || (options.probe === undefined && !runs[0].lm.converged)) {
     for (const k of PROBE_FACTORS) {
       const s = starts[0].map((v) => v * k);
       runs.push({ start: s, lm: levenbergMarquardt(problem, s, lmOptions) });
@@ -117,8 +117,9 @@ function fitCurveUnguarded(
     .sort((a, b) => Number(b.lm.converged) - Number(a.lm.converged) || a.lm.ssr - b.lm.ssr);
   const best = ranked[0] ?? runs[0];
   const flags: Flag[] = [];
+  // a start that stopped at a clearly higher SSR than the best ended on a plateau or a local minimum
   const stalled = runs.filter(
-    (r) => r.lm.converged && best.lm.converged && r.lm.ssr > best.lm.ssr * (1 + 1e-6) + 1e-300,
+    (r) => best.lm.converged && Number.isFinite(r.lm.ssr) && r.lm.ssr > best.lm.ssr * (1 + 1e-6) + 1e-300,
   );
   if (stalled.length > 0) {
     flags.push({
