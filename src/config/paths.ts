@@ -7,8 +7,11 @@ export function safeRedirect(target: string | null | undefined, fallback = '/'):
   return target;
 }
 
-/** What a page may hand to the sign-in page: a notice to show and the e-mail to fill in. */
-export type SignInState = { email?: string; notice?: string };
+/**
+ * What a page may hand to the sign-in page: a notice to show and the e-mail to fill in.
+ * `signedOut` marks the arrival from Sign out (the user is still cached for a moment).
+ */
+export type SignInState = { email?: string; notice?: string; signedOut?: boolean };
 
 export const paths = {
   home: { path: '/', href: () => '/' },

@@ -71,7 +71,9 @@ export function useSignOut() {
   const navigate = useNavigate();
   const finish = async (options?: SignOutOptions) => {
     setCsrfToken(null);
-    await navigate(paths.signIn.href(), { replace: true, state: options?.state });
+    // Leave the protected page first, so it does not ask to come back here after the next sign-in.
+    const state: SignInState = { ...options?.state, signedOut: true };
+    await navigate(paths.signIn.href(), { replace: true, state });
     queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== meQueryKey[0] });
     queryClient.setQueryData(meQueryKey, null);
   };

@@ -12,7 +12,7 @@ export default function AccountRoute() {
         title="Account"
         description="Your name, e-mail and role are set when you join; an admin changes the role and the teams."
       />
-      <div className="grid grid-cols-2 gap-6">
+      <div className="grid grid-cols-2 items-start gap-6">
         <section className="rounded-md border border-line bg-surface p-5" aria-labelledby="account-details">
           <h2 id="account-details" className="mb-3 text-lg">
             Your details
@@ -23,7 +23,7 @@ export default function AccountRoute() {
           <h2 id="account-password" className="mb-3 text-lg">
             Change password
           </h2>
-          <ChangePasswordForm />
+          <ChangePasswordForm email={me.email} />
         </section>
       </div>
     </>

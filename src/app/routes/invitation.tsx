@@ -68,7 +68,7 @@ function ValidInvitation({ token }: { token: string }) {
         </Notice>
       )}
       <div className="mt-5">
-        <AcceptInvitationForm token={token} onAccepted={accepted} />
+        <AcceptInvitationForm token={token} email={invitation.data.email} onAccepted={accepted} />
       </div>
     </AuthCard>
   );

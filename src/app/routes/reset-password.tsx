@@ -1,13 +1,16 @@
+import { useQueryClient } from '@tanstack/react-query';
 import { Link, useNavigate, useParams } from 'react-router';
 import { tokenSchema } from '@shared/schemas/auth';
 import { AuthCard } from '@/components/layouts/auth-card';
 import { Notice } from '@/components/ui/notice';
 import { paths, type SignInState } from '@/config/paths';
 import { NewPasswordForm } from '@/features/auth/components/new-password-form';
+import { meQueryKey } from '@/lib/query-client';
 
 export default function ResetPasswordRoute() {
   const { token = '' } = useParams();
   const navigate = useNavigate();
+  const queryClient = useQueryClient();
   const back = (
     <Link to={paths.resetRequest.href()} className="text-accent-700 underline">
       Ask for a new link
@@ -22,17 +25,22 @@ export default function ResetPasswordRoute() {
       </AuthCard>
     );
   }
-  const done = () => {
-    const state: SignInState = { notice: 'Password changed. Sign in with the new password.' };
-    void navigate(paths.signIn.href(), { replace: true, state });
+  const done = async () => {
+    // The server ends every session of the account, this browser's too if it was signed in to it.
+    const state: SignInState = {
+      notice: 'Password changed. Sign in with the new password.',
+      signedOut: true,
+    };
+    await navigate(paths.signIn.href(), { replace: true, state });
+    await queryClient.invalidateQueries({ queryKey: meQueryKey });
   };
   return (
     <AuthCard
       title="Choose a new password"
-      intro="Your other open sessions end when the password changes."
+      intro="Every open session of the account ends when the password changes."
       footer={back}
     >
-      <NewPasswordForm token={token} onDone={done} />
+      <NewPasswordForm token={token} onDone={() => void done()} />
     </AuthCard>
   );
 }

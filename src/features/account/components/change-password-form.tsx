@@ -17,7 +17,9 @@ const schema = changePasswordSchema
 type Values = z.infer<typeof schema>;
 const empty: Values = { currentPassword: '', newPassword: '', repeat: '' };
 
-export function ChangePasswordForm() {
+export type ChangePasswordFormProps = { email: string };
+
+export function ChangePasswordForm({ email }: ChangePasswordFormProps) {
   const toast = useToast();
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<Values>({ resolver: zodResolver(schema), defaultValues: empty });
@@ -41,6 +43,8 @@ export function ChangePasswordForm() {
 
   return (
     <form onSubmit={onSubmit} noValidate className="max-w-sm space-y-4">
+      {/* Lets password managers tie the new password to the right account. */}
+      <input type="email" name="username" autoComplete="username" value={email} readOnly hidden />
       {formError && <Notice tone="error">{formError}</Notice>}
       <TextField
         label="Current password"

@@ -10,17 +10,16 @@ import { paths } from '@/config/paths';
 import { useSignIn } from '@/lib/auth';
 import { applyServerErrors } from '@/lib/form-errors';
 
-export type SignInFormProps = { defaultEmail?: string };
+export type SignInFormProps = { defaultEmail?: string; onSignedIn: () => void };
 
-export function SignInForm({ defaultEmail = '' }: SignInFormProps) {
+export function SignInForm({ defaultEmail = '', onSignedIn }: SignInFormProps) {
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<SignInInput>({
     resolver: zodResolver(signInSchema),
     defaultValues: { email: defaultEmail, password: '' },
   });
   const { errors } = form.formState;
-  // On success the page sees the signed-in user and moves on to where they were headed.
-  const signIn = useSignIn();
+  const signIn = useSignIn({ onSuccess: onSignedIn });
 
   const onSubmit = form.handleSubmit((input) => {
     setFormError(null);

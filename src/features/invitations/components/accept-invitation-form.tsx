@@ -15,9 +15,9 @@ const schema = acceptInvitationSchema
   .refine((v) => v.password === v.repeat, { path: ['repeat'], message: 'The two passwords differ.' });
 type Values = z.input<typeof schema>;
 
-export type AcceptInvitationFormProps = { token: string; onAccepted: (email: string) => void };
+export type AcceptInvitationFormProps = { token: string; email: string; onAccepted: (email: string) => void };
 
-export function AcceptInvitationForm({ token, onAccepted }: AcceptInvitationFormProps) {
+export function AcceptInvitationForm({ token, email, onAccepted }: AcceptInvitationFormProps) {
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<Values, unknown, z.output<typeof schema>>({
     resolver: zodResolver(schema),
@@ -35,6 +35,8 @@ export function AcceptInvitationForm({ token, onAccepted }: AcceptInvitationForm
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
+      {/* Lets password managers store the new password under the invited address. */}
+      <input type="email" name="username" autoComplete="username" value={email} readOnly hidden />
       {formError && <Notice tone="error">{formError}</Notice>}
       <TextField
         label="Your name"

@@ -8,7 +8,7 @@ export function InvitationSummary({ invitation }: InvitationSummaryProps) {
   return (
     <dl className="grid grid-cols-[7rem_1fr] gap-x-3 gap-y-1 rounded border border-line bg-canvas px-3 py-2">
       <dt className="text-ink-muted">E-mail</dt>
-      <dd className="font-semibold break-all">{invitation.email}</dd>
+      <dd className="font-semibold [overflow-wrap:anywhere]">{invitation.email}</dd>
       <dt className="text-ink-muted">Role</dt>
       <dd>{roleLabels[invitation.role]}</dd>
       <dt className="text-ink-muted">Team</dt>

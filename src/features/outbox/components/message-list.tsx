@@ -18,7 +18,7 @@ const columns = [
   column.accessor((m) => m.recipients.join(', '), {
     id: 'recipients',
     header: 'To',
-    meta: { className: 'break-all' },
+    meta: { className: '[overflow-wrap:anywhere]' },
   }),
 ];
 

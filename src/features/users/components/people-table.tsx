@@ -20,28 +20,31 @@ export type PeopleTableProps = {
 };
 
 function describe({ user, change }: Pending, self: boolean) {
-  const who = self ? 'your own account' : user.name;
   if (change.role) {
+    const to = roleLabels[change.role];
     return {
-      title: `Change the role of ${user.name}?`,
-      body: `${roleLabels[user.role]} → ${roleLabels[change.role]}. The server applies the new role from ${self ? 'your' : 'their'} next request.`,
-      confirm: `Make ${roleLabels[change.role].toLowerCase()}`,
-      done: `${user.name} is now ${roleLabels[change.role].toLowerCase()}.`,
+      title: self ? 'Change your own role?' : `Change the role of ${user.name}?`,
+      body: `${roleLabels[user.role]} → ${to}. The server applies the new role from ${self ? 'your' : 'their'} next request${self ? '; pages your new role cannot open disappear from your menu' : ''}.`,
+      confirm: `Make ${to.toLowerCase()}`,
+      done: `${user.name} is now ${to.toLowerCase()}.`,
     };
   }
-  return change.active
-    ? {
-        title: `Reactivate ${user.name}?`,
-        body: `${user.name} can sign in again with their existing password.`,
-        confirm: 'Reactivate',
-        done: `${user.name} was reactivated.`,
-      }
-    : {
-        title: `Deactivate ${user.name}?`,
-        body: `${user.name} can no longer sign in, and every open session of ${who} ends now. Their records stay, and you can reactivate the account later.`,
-        confirm: 'Deactivate',
-        done: `${user.name} was deactivated; their open sessions ended.`,
-      };
+  if (change.active) {
+    return {
+      title: `Reactivate ${user.name}?`,
+      body: `${user.name} can sign in again with their existing password.`,
+      confirm: 'Reactivate',
+      done: `${user.name} was reactivated.`,
+    };
+  }
+  return {
+    title: self ? 'Deactivate your own account?' : `Deactivate ${user.name}?`,
+    body: self
+      ? 'You can no longer sign in, and every open session of your account ends now, this one included. Another admin can reactivate it.'
+      : `${user.name} can no longer sign in, and every open session of theirs ends now. Their records stay, and you can reactivate the account later.`,
+    confirm: 'Deactivate',
+    done: `${user.name} was deactivated; their open sessions ended.`,
+  };
 }
 
 export function PeopleTable({ users, currentUserId, onChanged, toolbar }: PeopleTableProps) {
