@@ -109,7 +109,7 @@ describe('buffer series designer', () => {
     });
     expect(file.status).toBe(200);
     const book = new ExcelJS.Workbook();
-    await book.xlsx.load(file.body as Buffer);
+    await book.xlsx.load(file.body as Parameters<typeof book.xlsx.load>[0]);
     const recipes = book.getWorksheet('Recipes')!;
     expect(recipes.getRow(2).getCell(1).value).toBe(2.5);
     expect(recipes.rowCount).toBeGreaterThanOrEqual(1 + 12);

@@ -7,6 +7,7 @@ import { teamMembers, teams, users } from '../schema';
 import { writeAudit } from '../../services/audit/write-audit';
 import { seedBuiltInBuffers } from '../../services/buffers/library';
 import { demoPassword, demoPeople, demoTeam } from './demo-people';
+import { seedDemoRecords } from './demo-records';
 
 export type SeedStep = { name: string; run: (db: Db) => Promise<void> };
 
@@ -35,6 +36,7 @@ async function seedPeopleAndTeam(db: Db) {
 export const seedSteps: SeedStep[] = [
   { name: 'people and team', run: seedPeopleAndTeam },
   { name: 'buffer library', run: seedBuiltInBuffers },
+  { name: 'enzyme, variants, assays and buffer series', run: seedDemoRecords },
 ];
 
 export async function seedDemo(db: Db, log: (line: string) => void = () => {}) {
