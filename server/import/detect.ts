@@ -4,9 +4,9 @@ import type { Draft, DetectContext } from './draft';
 import { ImportError, where } from './errors';
 import { findKineticColumns } from './find-kinetic-columns';
 import { findKineticRows } from './find-kinetic-rows';
-import { findLongTables } from './find-long-tables';
+import { findLongTables, WELL_HEADER } from './find-long-tables';
 import { findPlateGrids } from './find-plate-grids';
-import { cellRef, parseRef, type Grid, type Region } from './grid';
+import { cellRef, inRegion, parseRef, type Grid, type Region } from './grid';
 import { findLabel, wavelengthsOf } from './labels';
 import type { BlockDetail, ParseNote, ParsedBlock } from './types';
 
@@ -23,6 +23,7 @@ export function detectBlocks(grids: Grid[], notes: ParseNote[]): ParsedBlock[] {
       checkNotCutShort(grid, draft.region);
       blocks.push(toBlock(grid, draft, context.claimed));
     }
+    noteLoneWellColumns(context);
   }
   return blocks;
 }
@@ -42,7 +43,7 @@ function toBlock(grid: Grid, draft: Draft, claimed: Region[]): ParsedBlock {
       columns: draft.region.right - draft.region.left + 1,
     },
     labelCell: draft.headerLabel !== undefined ? topLeft : (found?.cell ?? null),
-    wavelength: wavelengthsOf(label),
+    wavelength: wavelengthOf(label, grid.name),
     raw: {},
   };
   const base = { plateFormat: draft.content.plateFormat, sheet: grid.name, label };
@@ -59,6 +60,13 @@ function toBlock(grid: Grid, draft: Draft, claimed: Region[]): ParsedBlock {
     flags,
     detail: { ...detail, points, timeSpelling, temperature },
   };
+}
+
+/** From the label, or else from the sheet's name (readers often name a sheet after its read: "Abs 405"). */
+function wavelengthOf(label: string, sheet: string): BlockDetail['wavelength'] {
+  const fromLabel = wavelengthsOf(label);
+  const found = fromLabel.nm !== null || fromLabel.excitationNm !== null;
+  return found ? fromLabel : wavelengthsOf(sheet);
 }
 
 function fallbackLabel(draft: Draft, topLeft: string): string {
@@ -103,4 +111,18 @@ function checkNotCutShort(grid: Grid, region: Region): void {
     `${where(grid.name, cell)}the file ends in the middle of a row of the table that starts at ${cellRef(region.top, region.left)}; it looks cut short. Export it again.`,
     { sheet: grid.name, cell },
   );
+}
+
+/** A 'Well' header that no table took: most likely its value column has a name Bellwether does not know. */
+function noteLoneWellColumns({ grid, claimed, notes }: DetectContext): void {
+  grid.forEach((cell, row, column) => {
+    if (cell.t !== 's' || !WELL_HEADER.test(cell.v.trim()) || claimed.some((r) => inRegion(r, row, column)))
+      return;
+    const ref = cellRef(row, column);
+    notes.push({
+      sheet: grid.name,
+      cell: ref,
+      message: `${where(grid.name, ref)}a '${cell.v.trim()}' column without a value column beside it (named Value, Absorbance, OD, Fluorescence, RFU, Signal or Result) or times across; it was not read.`,
+    });
+  });
 }

@@ -23,7 +23,7 @@ import {
   type WellPosition,
 } from './wells';
 
-const WELL_HEADER = /^well(?:\s*(?:id|name|position|pos\.?|no\.?))?$/i;
+export const WELL_HEADER = /^well(?:\s*(?:id|name|position|pos\.?|no\.?))?$/i;
 const VALUE_HEADER =
   /^(?:values?|abs(?:orbance)?|od|optical density|fluorescence|fluo|rfu|rlu|signal|results?|raw(?: data)?|measurements?|reading|intensity|luminescence|counts?)(?![a-z])/i;
 const BARE_VALUE_HEADER = /^(?:values?|results?|measurements?|reading|raw(?: data)?)$/i;

@@ -1,6 +1,6 @@
 // The demo seed: everything the README promises is there, and a second run duplicates nothing.
-import { getTableName, sql } from 'drizzle-orm';
-import type { PgTable } from 'drizzle-orm/pg-core';
+import { getTableName, is, sql } from 'drizzle-orm';
+import { PgTable } from 'drizzle-orm/pg-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as schema from '../../server/db/schema';
 import { seedDemo } from '../../server/db/seed';
@@ -13,7 +13,7 @@ beforeAll(async () => {
 });
 afterAll(() => t?.close());
 
-const tables = Object.values(schema).filter((v): v is PgTable => typeof v === 'object' && v !== null && Symbol.for('drizzle:IsDrizzleTable') in v);
+const tables = (Object.values(schema) as unknown[]).filter((v): v is PgTable => is(v, PgTable));
 
 async function counts() {
   const result: Record<string, number> = {};
@@ -37,10 +37,16 @@ describe('demo seed', () => {
     expect(first.variants).toBe(5);
     expect(first.assays).toBe(2);
     expect(first.buffer_series).toBe(1);
+    expect(first.studies).toBe(3);
+    expect(first.plates).toBe(6);
+    expect(first.reader_files).toBe(6);
+    expect(first.well_records).toBe(6 * 96);
     const scientist = await signIn(t, 'scientist@example.org', 'fennel-ridge-demo');
     const enzymes = await scientist.agent.get('/api/enzymes').expect(200);
     expect(enzymes.body.map((e: { name: string }) => e.name)).toEqual(['FR1 phytase']);
     const series = await scientist.agent.get('/api/buffer-series').expect(200);
     expect(series.body[0].input.pHPoints[0]).toBe(2.5);
+    const studies = await scientist.agent.get('/api/studies').expect(200);
+    expect(studies.body.map((x: { status: string }) => x.status).sort()).toEqual(['approved', 'draft', 'in_review']);
   });
 });

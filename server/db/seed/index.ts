@@ -8,6 +8,7 @@ import { writeAudit } from '../../services/audit/write-audit';
 import { seedBuiltInBuffers } from '../../services/buffers/library';
 import { demoPassword, demoPeople, demoTeam } from './demo-people';
 import { seedDemoRecords } from './demo-records';
+import { seedDemoStudies } from './demo-studies';
 
 export type SeedStep = { name: string; run: (db: Db) => Promise<void> };
 
@@ -37,6 +38,7 @@ export const seedSteps: SeedStep[] = [
   { name: 'people and team', run: seedPeopleAndTeam },
   { name: 'buffer library', run: seedBuiltInBuffers },
   { name: 'enzyme, variants, assays and buffer series', run: seedDemoRecords },
+  { name: 'studies, plates and generated reader files', run: seedDemoStudies },
 ];
 
 export async function seedDemo(db: Db, log: (line: string) => void = () => {}) {
