@@ -10,7 +10,8 @@ export type PagerProps = {
 
 /** "1–50 of 312 entries" with previous/next, for lists the server pages. */
 export function Pager({ offset, limit, total, onChange, noun = 'entries' }: PagerProps) {
-  const first = total === 0 ? 0 : offset + 1;
+  if (total === 0) return null;
+  const first = offset + 1;
   const last = Math.min(offset + limit, total);
   return (
     <nav aria-label="Pages" className="no-print mt-2 flex items-center justify-end gap-3 text-ink-muted">
