@@ -3,7 +3,8 @@
 import ExcelJS from 'exceljs';
 import { describe, expect, it } from 'vitest';
 import { parseReaderFile, type ParseResult } from '../../../server/import';
-import { MAX_FILE_BYTES } from '../../../server/import/limits';
+import { MAX_CELLS, MAX_FILE_BYTES } from '../../../server/import/limits';
+import { readZipDirectory } from '../../../server/import/zip-directory';
 import {
   SheetSpec,
   toText,
@@ -131,8 +132,36 @@ describe('files that are not reader data', () => {
     }
   });
 
-  it('refuses a text table larger than a spreadsheet can hold', async () => {
+  it('refuses a workbook whose sheet is damaged inside, rather than read wrong numbers from it', async () => {
+    const sheet = new SheetSpec('Results');
+    grid96(sheet, 'B2');
+    const whole = await toXlsx([sheet]);
+    const entry = readZipDirectory(whole).find((e) => e.name === 'xl/worksheets/sheet1.xml')!;
+    const dataStart =
+      entry.localOffset +
+      30 +
+      whole.readUInt16LE(entry.localOffset + 26) +
+      whole.readUInt16LE(entry.localOffset + 28);
+    const flipped = Buffer.from(whole);
+    flipped[dataStart + Math.floor(entry.packed / 2)] ^= 0xff;
+    const error = await refused(flipped, 'damaged.xlsx');
+    expect(error.code).toBe('unreadable_workbook');
+    expect(error.message).toMatch(
+      /its part 'xl\/worksheets\/sheet1\.xml' (does not match its checksum|cannot be unpacked)/,
+    );
+    const renamed = Buffer.from(whole);
+    renamed[entry.localOffset + 30 + 3] ^= 0x20; // 'xl/w' -> 'xl/W' in the local header only
+    expect((await refused(renamed, 'renamed.xlsx')).message).toMatch(/recorded under two different names/);
+  });
+
+  it('refuses a text table larger than a spreadsheet can hold, or with absurdly many cells', async () => {
     expect(await refused(csv(`${'1,'.repeat(20_000)}1\n`))).toMatchObject({ code: 'too_many_cells' });
+    const tall = `${'1,2,3,4,5,6,7,8,9,10\n'.repeat(MAX_CELLS / 10 + 1)}`;
+    const error = await refused(csv(tall));
+    expect(error.code).toBe('too_many_cells');
+    expect(error.message).toMatch(
+      /larger than Bellwether accepts \(at most 1,048,576 rows, 16,384 columns and 1,500,000 cells\)/,
+    );
   });
 
   it('refuses a text file whose quotation mark never closes', async () => {
@@ -146,6 +175,13 @@ describe('files that are not reader data', () => {
     expect(error.code).toBe('nothing_found');
     expect(error.message).toMatch(/No reader data was found in its sheet 'samples'/);
     expect(error.message).toMatch(/plate grids.*kinetic tables.*long tables/);
+  });
+
+  it('points at a Well column it could not use', async () => {
+    const error = await refused(csv('Well,Conc\nA1,0.5\n'), 'lone.csv');
+    expect(error.notes?.map((n) => n.message)).toEqual([
+      "Sheet 'lone', cell A1: a 'Well' column without a value column beside it (named Value, Absorbance, OD, Fluorescence, RFU, Signal or Result) or times across; it was not read.",
+    ]);
   });
 });
 
@@ -200,7 +236,7 @@ describe('tables with a defect, named by sheet and cell', () => {
 
   it('refuses a well twice in a long table without times', async () => {
     const error = await refused(csv('Well,Value\nA1,0.1\nB1,0.2\nA1,0.3\n'), 'long.csv');
-    expect(error).toMatchObject({ code: 'duplicate_well', cell: 'B4' });
+    expect(error).toMatchObject({ code: 'duplicate_well', cell: 'A4' });
     expect(error.message).toMatch(/well A1 appears a second time \(first on row 2\)/);
   });
 
@@ -256,5 +292,64 @@ describe('odd but readable files', () => {
     );
     expectWellFormed(result);
     expect(result.ok && result.value.blocks[0].wells.H12).toBe(0.095);
+  });
+
+  it('reads a long table with two value columns as two blocks named by their headers', async () => {
+    const result = await parseReaderFile(csv('Well,Abs 405,Abs 600\nA1,0.1,0.5\nA2,0.2,OVER\n'), 'two.csv');
+    expectWellFormed(result);
+    if (!result.ok) throw new Error(result.error.message);
+    expect(result.value.blocks.map((b) => [b.label, b.detail.wavelength.nm, b.wells])).toEqual([
+      ['Abs 405', 405, { A1: 0.1, A2: 0.2 }],
+      ['Abs 600', 600, { A1: 0.5, A2: null }],
+    ]);
+    expect(result.value.blocks[1].flags).toEqual({ A2: 'saturated' });
+  });
+
+  it('keeps two kinetic tables side by side apart', async () => {
+    const lines = [
+      'Read 1: 405,,,,Read 2: 600',
+      'Time [s],A1,A2,,Time [s],A1,A2',
+      '0,0.1,0.2,,0,0.5,0.6',
+      '30,0.11,0.21,,30,0.51,0.61',
+    ];
+    const result = await parseReaderFile(csv(`${lines.join('\n')}\n`), 'pair.csv');
+    expectWellFormed(result);
+    if (!result.ok) throw new Error(result.error.message);
+    expect(result.value.blocks.map((b) => [b.label, b.detail.location.topLeft, b.wells])).toEqual([
+      ['Read 1: 405', 'A2', { A1: [0.1, 0.11], A2: [0.2, 0.21] }],
+      ['Read 2: 600', 'E2', { A1: [0.5, 0.51], A2: [0.6, 0.61] }],
+    ]);
+  });
+
+  it('reads time values of a workbook in the 1904 date system', async () => {
+    const workbook = new ExcelJS.Workbook();
+    workbook.properties.date1904 = true;
+    const sheet = workbook.addWorksheet('Mac');
+    sheet.getCell('A1').value = 'Time';
+    sheet.getCell('B1').value = 'A1';
+    [0, 45, 90].forEach((s, k) => {
+      // In the 1904 system day 0 is 1904-01-01: a time of day is that date plus the time.
+      sheet.getCell(2 + k, 1).value = new Date(Date.UTC(1904, 0, 1) + s * 1000);
+      sheet.getCell(2 + k, 1).numFmt = 'mm:ss';
+      sheet.getCell(2 + k, 2).value = 0.1 * (k + 1);
+    });
+    const result = await parseReaderFile(Buffer.from(await workbook.xlsx.writeBuffer()), 'mac.xlsx');
+    expectWellFormed(result);
+    expect(result.ok && result.value.blocks[0].kind === 'kinetic' && result.value.blocks[0].times_s).toEqual([
+      0, 45, 90,
+    ]);
+  });
+
+  it('takes the wavelength from the sheet name when the label has none', async () => {
+    const workbook = new ExcelJS.Workbook();
+    const sheet = workbook.addWorksheet('Abs 405');
+    sheet.addRow(['Time [s]', 'A1']);
+    sheet.addRow([0, 0.1]);
+    sheet.addRow([30, 0.2]);
+    const result = await parseReaderFile(Buffer.from(await workbook.xlsx.writeBuffer()), 'named.xlsx');
+    expect(result.ok && [result.value.blocks[0].label, result.value.blocks[0].detail.wavelength.nm]).toEqual([
+      'Kinetic table at A1',
+      405,
+    ]);
   });
 });
