@@ -9,7 +9,7 @@ import { ChemFailure } from './result';
 import { brent } from './roots';
 import {
   resolveComposition,
-  resolveSystem,
+  resolveLibrary,
   strongIonSums,
   type Composition,
   type ResolvedBuffer,
@@ -41,10 +41,7 @@ export interface Environment {
 
 export function environment(c: Conditions): Environment {
   const celsius = checkTemperature(c.temperatureC);
-  const library = c.library ?? [];
-  if (!Array.isArray(library))
-    throw new ChemFailure('invalid-input', 'The extra library must be a list of buffer systems.');
-  for (const system of library) resolveSystem(system);
+  const library = resolveLibrary(c.library);
   const model = c.activityModel ?? 'davies';
   checkChoice(model, 'Activity model', ['davies', 'extended-debye-huckel', 'ideal']);
   checkChoice(c.temperatureModel, 'Temperature model', ['goldberg', 'roy', 'slope']);

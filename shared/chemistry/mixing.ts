@@ -7,7 +7,14 @@ import { formulaWeight } from './formula';
 import type { BufferSystem, Salt } from './library';
 import { brent } from './roots';
 import { ChemFailure, guardInput, type ChemResult } from './result';
-import { combine, resolveComposition, resolveSystem, type Composition, type StrongIon } from './solution';
+import {
+  combine,
+  resolveComposition,
+  resolveLibrary,
+  resolveSystem,
+  type Composition,
+  type StrongIon,
+} from './solution';
 import { summarise, type SolutionResult } from './solve';
 import { checkAmount, checkChoice, checkTemperature, shown } from './validate';
 
@@ -103,6 +110,7 @@ export function solutionFromIngredients(input: {
 }): ChemResult<Composition> {
   return guardInput(input, () => {
     const V = checkAmount(input.volume, 'Volume', true);
+    const library = resolveLibrary(input.library);
     if (!Array.isArray(input.ingredients))
       throw new ChemFailure('invalid-input', 'Give a list of ingredients.');
     const parts = input.ingredients.map((ing): Composition => {
@@ -126,7 +134,7 @@ export function solutionFromIngredients(input: {
           ions: Object.fromEntries(Object.entries(ions).map(([k, v]) => [k, (v * n) / V])),
         };
       }
-      const system = resolveSystem(ing.system, input.library);
+      const system = resolveSystem(ing.system, library);
       const form = findForm(system, ing.formId);
       const moles =
         ing.moles !== undefined

@@ -1,10 +1,9 @@
 // The amounts of a recipe: per-litre drafts scaled to the final volume, with grams from formula
 // weights, volumes of stocks, titrant and pure liquids (from density), and the salt.
 import { formulaWeight } from './formula';
-import type { BufferForm, Salt } from './library';
+import type { BufferForm, BufferSystem, Salt } from './library';
 import type { RecipeComponent, RecipeInput } from './recipe-types';
 import { ChemFailure } from './result';
-import { resolveSystem } from './solution';
 import { checkAmount } from './validate';
 
 export type DraftComponent = Omit<RecipeComponent, 'volume' | 'stockConc'>;
@@ -26,7 +25,12 @@ export function formComponent(
   };
 }
 
-export function withVolumes(c: DraftComponent, V: number, input: RecipeInput): RecipeComponent {
+export function withVolumes(
+  c: DraftComponent,
+  V: number,
+  input: RecipeInput,
+  system: BufferSystem,
+): RecipeComponent {
   const moles = c.moles * V;
   const grams = c.grams === null ? null : c.grams * V;
   if (c.role === 'titrant') {
@@ -39,7 +43,8 @@ export function withVolumes(c: DraftComponent, V: number, input: RecipeInput): R
     const conc = checkAmount(stock, `Stock concentration of ${c.name}`, true);
     return { ...c, moles, grams, volume: moles / conc, stockConc: conc };
   }
-  const density = findDensity(input, c.id);
+  const form = system.forms.find((f) => f.id === c.id);
+  const density = form && form.state === 'liquid' ? form.density : null;
   return {
     ...c,
     moles,
@@ -47,12 +52,6 @@ export function withVolumes(c: DraftComponent, V: number, input: RecipeInput): R
     volume: density && grams !== null ? grams / density / 1000 : null,
     stockConc: null,
   };
-}
-
-function findDensity(input: RecipeInput, formId: string): number | null {
-  const system = typeof input.system === 'string' ? resolveSystem(input.system, input.library) : input.system;
-  const form = system.forms.find((f) => f.id === formId);
-  return form && form.state === 'liquid' ? form.density : null;
 }
 
 export function saltComponent(salt: Salt, conc: number, V: number): RecipeComponent {

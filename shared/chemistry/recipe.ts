@@ -101,7 +101,7 @@ export function computeRecipe(input: RecipeInput): Recipe {
   const pKapp = state.buffers[0].pKapp;
   checkNearPKa(system.name, pH, pKapp);
   addIonicStrengthWarnings(state.ionicStrength, env);
-  const components = plan.describe().map((c) => withVolumes(c, V, input));
+  const components = plan.describe().map((c) => withVolumes(c, V, input, system));
   if (added > 0) components.push(saltComponent(salt, added, V));
   checkVolumes(components, V);
   const capacity = capacityOfState(state);

@@ -11,7 +11,7 @@ import { computeRecipe, type Recipe, type RecipeMethod } from './recipe';
 import { LARGE_DPKA_DT, SAFETY_CAUTION } from './recipe-steps';
 import { ChemFailure, guardInput, type ChemResult } from './result';
 import type { ActivityModel } from './activity';
-import { resolveComposition, resolveSystem } from './solution';
+import { resolveComposition, resolveLibrary, resolveSystem } from './solution';
 import { checkAmount, checkPH, checkRange, checkTemperature } from './validate';
 
 export interface SeriesInput {
@@ -94,10 +94,7 @@ function design(input: SeriesInput): Series {
   ) {
     throw new ChemFailure('invalid-input', 'The well needs a buffer volume and a list of additions.');
   }
-  if (input.library !== undefined && !Array.isArray(input.library)) {
-    throw new ChemFailure('invalid-input', 'The extra library must be a list of buffer systems.');
-  }
-  const library = input.library ?? [];
+  const library = resolveLibrary(input.library);
   const systems = input.systems
     ? (Array.isArray(input.systems) ? input.systems : [input.systems]).map((id) => resolveSystem(id, library))
     : [...library, ...bufferLibrary.filter((s) => s.designerDefault)];
@@ -116,7 +113,7 @@ function design(input: SeriesInput): Series {
     designPoint(pH, stepTable, { input, assayT, makeT, C, weakBelow, driftLimit, library }),
   );
   if (input.overlap ?? true)
-    addOverlaps(designed, stepTable, { input, assayT, makeT, C, weakBelow, driftLimit, library });
+    addOverlaps(designed, { input, assayT, makeT, C, weakBelow, driftLimit, library });
   const Is = designed.flatMap((p) => (p.recipe ? [p.recipe.ionicStrength] : []));
   const range: [number, number] | null = Is.length ? [Math.min(...Is), Math.max(...Is)] : null;
   const cautions = seriesCautions(designed, systems, assayT, makeT, range, input.targetIonicStrength);
@@ -142,10 +139,13 @@ interface Ctx {
 
 type StepRow = Omit<Candidate, 'distance'>;
 
-function candidatesAt(pH: number, table: StepRow[]): Candidate[] {
+/** The estimated pK″ may differ from a recipe's own by a few tenths (citrate at high I). */
+const SCREEN_WINDOW = 1.4;
+
+function candidatesAt(pH: number, table: StepRow[], window = 1): Candidate[] {
   return table
     .map((row) => ({ ...row, distance: Math.abs(pH - row.pKapp) }))
-    .filter((c) => c.distance <= 1)
+    .filter((c) => c.distance <= window)
     .sort((a, b) => a.distance - b.distance);
 }
 
@@ -179,31 +179,35 @@ function designPoint(pH: number, table: StepRow[], ctx: Ctx): SeriesPoint {
     well: null,
     warnings: [],
   };
-  const candidates = candidatesAt(pH, table);
-  // One entry per system (its nearest step), so alternatives name distinct buffers.
-  const seen = new Set<string>();
-  const distinct = candidates.filter((c) => !seen.has(c.systemId) && seen.add(c.systemId));
-  for (const c of distinct) {
+  // Screen with the estimated I, then rank by the pK″ of each candidate's own recipe (its I).
+  const failures: string[] = [];
+  const made = candidatesAt(pH, table, SCREEN_WINDOW).flatMap((c) => {
     try {
-      point.recipe = recipeFor(pH, c, ctx);
-      point.proposal = {
-        ...c,
-        pKapp: point.recipe.ionization.pKapp,
-        distance: Math.abs(pH - point.recipe.ionization.pKapp),
-      };
-      break;
+      const recipe = recipeFor(pH, c, ctx);
+      const pKapp = recipe.ionization.pKapp;
+      return [{ candidate: { ...c, pKapp, distance: Math.abs(pH - pKapp) }, recipe }];
     } catch (error) {
       if (!(error instanceof ChemFailure)) throw error;
-      point.warnings.push(`${c.systemName}: ${error.message}`);
+      failures.push(`${c.systemName}: ${error.message}`);
+      return [];
     }
-  }
-  if (!point.recipe || !point.proposal) {
+  });
+  const ranked = made
+    .filter((m) => m.candidate.distance <= 1)
+    .sort((a, b) => a.candidate.distance - b.candidate.distance);
+  // One entry per system (its nearest step), so alternatives name distinct buffers.
+  const seen = new Set<string>();
+  const distinct = ranked.filter((m) => !seen.has(m.candidate.systemId) && seen.add(m.candidate.systemId));
+  if (distinct.length === 0) {
     point.warnings.push(
       `No buffer among the candidates has a pK″ within one unit of pH ${pH} at ${ctx.assayT} °C.`,
+      ...failures,
     );
     return point;
   }
-  point.alternatives = distinct.filter((c) => c.systemId !== point.proposal?.systemId);
+  point.proposal = distinct[0].candidate;
+  point.recipe = distinct[0].recipe;
+  point.alternatives = distinct.slice(1).map((m) => m.candidate);
   const r = point.recipe;
   point.capacity = r.capacity.total;
   point.relativeCapacity = r.capacity.buffer / ((Math.LN10 * ctx.C) / 4);
@@ -275,14 +279,15 @@ function wellPH(r: Recipe, ctx: Ctx): SeriesPoint['well'] {
   return { pH, drift: pH - r.targetPH };
 }
 
-function addOverlaps(points: SeriesPoint[], table: StepRow[], ctx: Ctx): void {
+function addOverlaps(points: SeriesPoint[], ctx: Ctx): void {
   for (let i = 0; i + 1 < points.length; i++) {
     const a = points[i];
     const b = points[i + 1];
     if (!a.proposal || !b.proposal || a.proposal.systemId === b.proposal.systemId) continue;
     const tryOverlap = (at: SeriesPoint, other: Candidate): boolean => {
       if (at.overlap) return false;
-      const c = candidatesAt(at.pH, table).find((x) => x.systemId === other.systemId);
+      // the other system must itself be a candidate here: its own recipe within one unit
+      const c = at.alternatives.find((x) => x.systemId === other.systemId);
       if (!c) return false;
       try {
         const recipe = recipeFor(at.pH, c, ctx);

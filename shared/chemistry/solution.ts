@@ -102,3 +102,16 @@ export function combine(parts: { composition: Composition; factor: number }[]): 
   }
   return { buffers: [...buffers].map(([systemId, total]) => ({ systemId, total })), ions };
 }
+
+/** Lab-added systems given with a calculation, validated (and their defaults filled in). */
+export function resolveLibrary(library: unknown): BufferSystem[] {
+  if (library === undefined) return [];
+  if (!Array.isArray(library))
+    throw new ChemFailure('invalid-input', 'The extra library must be a list of buffer systems.');
+  return library.map((system) => {
+    if (typeof system !== 'object' || system === null) {
+      throw new ChemFailure('invalid-input', 'Each entry of the extra library must be a buffer system.');
+    }
+    return resolveSystem(system as BufferSystem);
+  });
+}
