@@ -25,7 +25,7 @@ export function residualBootstrap(
   model: PhModel,
   data: PhData,
   spec: FitSpec,
-  theta: Float64Array,
+  theta: ArrayLike<number>,
   fitted: Float64Array,
   determined: readonly boolean[],
   nFitted: number,

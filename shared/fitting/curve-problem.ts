@@ -27,7 +27,7 @@ export function curveProblem(
   const EPS = 2.220446049250313e-16;
   const scale = difference === 'central' ? Math.cbrt(EPS) : Math.sqrt(EPS);
 
-  function numericGradient(xi: number, theta: Float64Array, f0: number): boolean {
+  function numericGradient(xi: number, theta: ArrayLike<number>, f0: number): boolean {
     shifted.set(theta);
     for (let j = 0; j < p; j++) {
       const h = scale * Math.max(Math.abs(theta[j]), 1e-8);

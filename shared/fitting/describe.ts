@@ -12,7 +12,7 @@ import { profileInterval, type ProfileTarget } from './profile-likelihood';
 import { finiteOrNull } from './result';
 import { runsTest } from './stats/runs-test';
 import type { DerivedEstimate, Interval, ParameterEstimate, ProfileFit } from './types';
-import { estimate, inverseNormalMatrix, quadraticForm, t975 } from './uncertainty';
+import { estimate, inverseNormalMatrix, quadraticFormOver, t975 } from './uncertainty';
 import { ENGINE_VERSION } from './version';
 import { curveShape, shapeGradients, type ShapeKey } from './window';
 
@@ -24,11 +24,10 @@ export interface DescribeOptions {
 
 const mul = (x: number | null, k: number): number | null => (x === null ? null : finiteOrNull(x * k));
 
-const derived = (value: number | null, se: number | null, dof: number): DerivedEstimate => ({
-  ...estimate(value, se, dof),
-  profile95: null,
-  boot95: null,
-});
+const derived = (value: number | null, se: number | null, dof: number): DerivedEstimate => {
+  const e = estimate(value, se, dof);
+  return { value: e.value, se: e.se, ci95: e.ci95, profile95: null, boot95: null };
+};
 
 /** Akaike's criterion with the small-sample correction (Hurvich & Tsai 1989), k = p + 1 (σ²). */
 export function aicc(ssr: number, n: number, p: number): number | null {
@@ -49,7 +48,11 @@ export function describeFit(
   const unit = (j: number): number => (j < m ? S : 1);
   const theta = core.theta;
   const free: number[] = [];
-  for (let j = 0; j < p; j++) if (core.spec.fixed[j] === null) free.push(j);
+  const at: number[] = []; // position of each parameter among the free ones, −1 when fixed
+  for (let j = 0; j < p; j++) {
+    at.push(core.spec.fixed[j] === null ? free.length : -1);
+    if (core.spec.fixed[j] === null) free.push(j);
+  }
   const determined = core.status.map((s) => s === 'free');
   const q = free.length;
   const n = data.nUsed;
@@ -76,9 +79,9 @@ export function describeFit(
   for (let a = 0; a < p; a++) {
     const rowC: (number | null)[] = [];
     const rowR: (number | null)[] = [];
-    const ia = free.indexOf(a);
+    const ia = at[a];
     for (let b = 0; b < p; b++) {
-      const ib = free.indexOf(b);
+      const ib = at[b];
       if (!cov || ia < 0 || ib < 0 || !determined[a] || !determined[b]) {
         rowC.push(null);
         rowR.push(null);
@@ -91,7 +94,7 @@ export function describeFit(
     correlation.push(rowR);
   }
   const seOf = (j: number): number | null => {
-    const i = free.indexOf(j);
+    const i = at[j];
     return cov && i >= 0 ? finiteOrNull(Math.sqrt(cov[i * q + i])) : null;
   };
 
@@ -112,11 +115,7 @@ export function describeFit(
   const seFor = (key: ShapeKey, value: number | null): number | null => {
     const g = grads?.[key];
     if (value === null || !g || !cov) return null;
-    const v = quadraticForm(
-      free.map((j) => g[j]),
-      cov,
-      q,
-    );
+    const v = quadraticFormOver(g, cov, free);
     return v >= 0 ? finiteOrNull(Math.sqrt(v)) : null;
   };
   const width = shape.lo !== null && shape.hi !== null ? shape.hi - shape.lo : null;
@@ -135,8 +134,8 @@ export function describeFit(
     const a = new Array<number>(p).fill(0);
     a[j] = -1;
     a[j + 1] = 1;
-    const ia = free.indexOf(j);
-    const ib = free.indexOf(j + 1);
+    const ia = at[j];
+    const ib = at[j + 1];
     const v = cov && ia >= 0 && ib >= 0 ? cov[ia * q + ia] + cov[ib * q + ib] - 2 * cov[ia * q + ib] : NaN;
     gaps.push({
       names: [model.names[j], model.names[j + 1]],
@@ -149,10 +148,7 @@ export function describeFit(
   const delta =
     model.names[m] === 'pKa1' ? derived(deltaGap?.delta ?? null, deltaGap?.se ?? null, dof) : null;
 
-  const runs = runsTest(
-    Array.from(data.pH).filter((_, i) => data.w[i] > 0),
-    residuals.filter((_, i) => data.w[i] > 0).map((r) => r ?? 0),
-  );
+  const runs = runsTest(data.pH, residuals, data.w);
   const flags = buildFlags({
     model,
     theta,
@@ -245,7 +241,7 @@ export function describeFit(
       data,
       core.spec,
       theta,
-      f,
+      Float64Array.from(f), // f lives in a scratch buffer
       determined,
       q,
       options.bootstrap,

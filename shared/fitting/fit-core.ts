@@ -22,7 +22,7 @@ export interface FitSpec {
 }
 
 export interface CoreFit {
-  theta: Float64Array;
+  theta: number[];
   /** per parameter: fitted (free), held fixed at a limit, or left undetermined */
   status: ('free' | 'fixed' | 'undetermined')[];
   ssr: number;
@@ -35,9 +35,9 @@ export interface CoreFit {
 
 interface Mapped {
   map: AffineMap | null;
-  lower: Float64Array;
-  upper: Float64Array;
-  toFree: (theta: ArrayLike<number>) => Float64Array;
+  lower: number[];
+  upper: number[];
+  toFree: (theta: ArrayLike<number>) => number[];
 }
 
 export function buildMap(model: PhModel, data: PhData, spec: FitSpec): Mapped {
@@ -63,8 +63,8 @@ export function buildMap(model: PhModel, data: PhData, spec: FitSpec): Mapped {
   const free: number[] = [];
   for (let j = 0; j < p; j++) if (spec.fixed[j] === null && j !== pivot) free.push(j);
   const q = free.length;
-  const lower = new Float64Array(q).fill(-Infinity);
-  const upper = new Float64Array(q).fill(Infinity);
+  const lower = new Array<number>(q).fill(-Infinity);
+  const upper = new Array<number>(q).fill(Infinity);
   let firstPKa = -1;
   free.forEach((j, k) => {
     if (j < m) return;
@@ -77,7 +77,7 @@ export function buildMap(model: PhModel, data: PhData, spec: FitSpec): Mapped {
       firstPKa = k;
     }
   });
-  if (q === p && !ordered) return { map: null, lower, upper, toFree: (t) => Float64Array.from(t) };
+  if (q === p && !ordered) return { map: null, lower, upper, toFree: (t) => Array.from(t) };
   const c = new Float64Array(p);
   const M = new Float64Array(p * q);
   for (let j = 0; j < p; j++) c[j] = spec.fixed[j] ?? 0;
@@ -98,8 +98,8 @@ export function buildMap(model: PhModel, data: PhData, spec: FitSpec): Mapped {
       else M[pivot * q + free.indexOf(j)] = -con.a[j] / con.a[pivot];
     }
   }
-  const toFree = (theta: ArrayLike<number>): Float64Array => {
-    const u = new Float64Array(q);
+  const toFree = (theta: ArrayLike<number>): number[] => {
+    const u = new Array<number>(q).fill(0);
     let prev: number | null = null;
     free.forEach((j, k) => {
       if (j >= m && ordered) {
@@ -114,7 +114,7 @@ export function buildMap(model: PhModel, data: PhData, spec: FitSpec): Mapped {
   return { map: { p, q, c, M }, lower, upper, toFree };
 }
 
-function clampStart(u: Float64Array, lower: Float64Array, upper: Float64Array): Float64Array {
+function clampStart(u: number[], lower: number[], upper: number[]): number[] {
   for (let k = 0; k < u.length; k++) u[k] = Math.min(upper[k], Math.max(lower[k], u[k]));
   return u;
 }
@@ -125,13 +125,13 @@ export function fitSpec(
   data: PhData,
   spec: FitSpec,
   options: LmOptions & { start?: ArrayLike<number> },
-): { theta: Float64Array; lm: LmResult; starts: number } | null {
+): { theta: number[]; lm: LmResult; starts: number } | null {
   const { map, lower, upper, toFree } = buildMap(model, data, spec);
   const problem = phProblem(model, data, map);
   const lmOptions: LmOptions = { ...options, lower, upper };
-  const toTheta = (u: Float64Array): Float64Array => {
-    if (!map) return Float64Array.from(u);
-    const theta = new Float64Array(model.names.length);
+  const toTheta = (u: number[]): number[] => {
+    if (!map) return u;
+    const theta = new Array<number>(model.names.length).fill(0);
     applyMap(map, u, theta);
     return theta;
   };
@@ -140,7 +140,7 @@ export function fitSpec(
     return { theta: toTheta(lm.theta), lm, starts: 1 };
   }
   const candidates = gridStarts(model, data, spec.fixed, 4);
-  let best: { theta: Float64Array; lm: LmResult } | null = null;
+  let best: { theta: number[]; lm: LmResult } | null = null;
   let starts = 0;
   for (const cand of candidates) {
     starts++;
@@ -214,7 +214,7 @@ export function fitModel(model: PhModel, data: PhData, options: LmOptions = {}):
     if (!changed) break;
     if (spec.fixed.every((v) => v !== null)) {
       // nothing left to fit: all activity levels vanished with their pKa values
-      run = { theta: Float64Array.from(spec.fixed as number[]), lm: run.lm, starts: 0 };
+      run = { theta: (spec.fixed as number[]).slice(), lm: run.lm, starts: 0 };
       break;
     }
     const again = fitSpec(model, data, spec, options);

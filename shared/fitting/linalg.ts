@@ -55,14 +55,15 @@ export function dampedCholeskySolve(
  * with partial pivoting on the Jacobi-scaled matrix. Returns null when it is numerically singular
  * (a pivot below `tol` relative to the unit diagonal), i.e. a parameter the data do not determine.
  */
-export function invertSymmetric(A: ArrayLike<number>, p: number, tol = 1e-13): Float64Array | null {
-  const s = new Float64Array(p);
+export function invertSymmetric(A: ArrayLike<number>, p: number, tol = 1e-13): number[] | null {
+  // plain arrays: for a few parameters they are cheaper to create than typed arrays
+  const s = new Array<number>(p).fill(0);
   for (let i = 0; i < p; i++) {
     const di = A[i * p + i];
     if (!(di > 0) || !Number.isFinite(di)) return null;
     s[i] = 1 / Math.sqrt(di);
   }
-  const m = new Float64Array(p * 2 * p);
+  const m = new Array<number>(p * 2 * p).fill(0);
   const w = 2 * p;
   for (let i = 0; i < p; i++) {
     for (let j = 0; j < p; j++) m[i * w + j] = A[i * p + j] * s[i] * s[j];
@@ -88,7 +89,7 @@ export function invertSymmetric(A: ArrayLike<number>, p: number, tol = 1e-13): F
       for (let k = 0; k < w; k++) m[r * w + k] -= f * m[c * w + k];
     }
   }
-  const out = new Float64Array(p * p);
+  const out = new Array<number>(p * p).fill(0);
   for (let i = 0; i < p; i++) for (let j = 0; j < p; j++) out[i * p + j] = m[i * w + p + j] * s[i] * s[j];
   for (let i = 0; i < p; i++) if (!Number.isFinite(out[i * p + i]) || out[i * p + i] < 0) return null;
   return out;

@@ -20,7 +20,7 @@ export interface LsqProblem {
    * Fills the weighted residuals r = √w (y − f) and, when J is given, J = √w ∂f/∂θ (row-major n×p).
    * Returns false when anything is not finite.
    */
-  evaluate(theta: Float64Array, r: Float64Array, J: Float64Array | null): boolean;
+  evaluate(theta: ArrayLike<number>, r: Float64Array, J: Float64Array | null): boolean;
 }
 
 export interface LmOptions {
@@ -36,7 +36,7 @@ export interface LmOptions {
 }
 
 export interface LmResult {
-  theta: Float64Array;
+  theta: number[];
   ssr: number;
   iterations: number;
   evaluations: number;
@@ -50,7 +50,11 @@ export interface LmResult {
 // (reference README: scipy's default tolerances missed 608 of 4,341).
 const DEFAULTS = { maxIterations: 200, ftol: 1e-15, xtol: 1e-11, gtol: 1e-12 };
 
-function clampInto(theta: Float64Array, lower?: ArrayLike<number>, upper?: ArrayLike<number>): void {
+function clampInto(
+  theta: number[] | Float64Array,
+  lower?: ArrayLike<number>,
+  upper?: ArrayLike<number>,
+): void {
   for (let j = 0; j < theta.length; j++) {
     if (lower && theta[j] < lower[j]) theta[j] = lower[j];
     if (upper && theta[j] > upper[j]) theta[j] = upper[j];
@@ -69,7 +73,7 @@ export function levenbergMarquardt(
   const gtol = options.gtol ?? DEFAULTS.gtol;
   const { lower, upper } = options;
 
-  const theta = Float64Array.from(start);
+  const theta = Array.from(start); // small plain arrays are cheaper to create than typed ones
   clampInto(theta, lower, upper);
   // Buffers come from the scratch pool and are used only up to n and p.
   let r = scratch('lm.r', n);
@@ -170,7 +174,7 @@ export function levenbergMarquardt(
       const actual = ssr - ssrT;
       const rho = pred > 0 ? actual / pred : -1;
       if (actual > 0 && rho > 0) {
-        theta.set(trial);
+        for (let j = 0; j < p; j++) theta[j] = trial[j];
         ssr = ssrT;
         [r, rT] = [rT, r];
         [J, JT] = [JT, J];

@@ -22,7 +22,7 @@ export interface AffineMap {
 /** A pKa this far beyond the data has no effect on them at double precision (10^−40 ≪ 10^−16). */
 export const FAR = 40;
 
-export function applyMap(map: AffineMap, u: ArrayLike<number>, theta: Float64Array): void {
+export function applyMap(map: AffineMap, u: ArrayLike<number>, theta: number[] | Float64Array): void {
   const { p, q, c, M } = map;
   for (let j = 0; j < p; j++) {
     let s = c[j];
@@ -68,13 +68,17 @@ export function phProblem(model: PhModel, data: PhData, map: AffineMap | null): 
   };
 }
 
-/** Model Jacobian ∂f/∂θ (n×p, unweighted) and fitted values at θ. */
+/**
+ * Model Jacobian ∂f/∂θ (n×p, unweighted) and fitted values at θ, in scratch buffers that stay
+ * valid until the next call (copy what must be kept).
+ */
 export function modelJacobian(model: PhModel, data: PhData, theta: ArrayLike<number>) {
   const p = model.names.length;
-  const J = new Float64Array(data.n * p);
-  const f = new Float64Array(data.n);
-  const grad = new Float64Array(p);
-  const k = new Float64Array(4);
+  const buf = scratch('jacobian', data.n * p + data.n + p + 4);
+  const J = buf.subarray(0, data.n * p);
+  const f = buf.subarray(data.n * p, data.n * p + data.n);
+  const grad = buf.subarray(data.n * p + data.n, data.n * p + data.n + p);
+  const k = buf.subarray(data.n * p + data.n + p, data.n * p + data.n + p + 4);
   model.constants(theta, k);
   for (let i = 0; i < data.n; i++) {
     f[i] = model.point(theta, k, data.h[i], data.g[i], grad);

@@ -26,14 +26,14 @@ export function profileInterval(
   model: PhModel,
   data: PhData,
   spec: FitSpec,
-  theta: Float64Array,
+  theta: ArrayLike<number>,
   ssrMin: number,
   s2: number,
   t: number,
   target: ProfileTarget,
 ): Interval {
   const base: FitSpec = { fixed: spec.fixed, ordered: false };
-  const ssrAt = (psi: number, warm: ArrayLike<number>): { excess: number; theta: Float64Array } | null => {
+  const ssrAt = (psi: number, warm: ArrayLike<number>): { excess: number; theta: number[] } | null => {
     const run = fitSpec(
       model,
       data,

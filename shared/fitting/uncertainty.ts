@@ -14,9 +14,9 @@ export function inverseNormalMatrix(
   n: number,
   p: number,
   free: readonly number[],
-): Float64Array | null {
+): number[] | null {
   const q = free.length;
-  const A = new Float64Array(q * q);
+  const A = new Array<number>(q * q).fill(0);
   for (let i = 0; i < n; i++) {
     if (!(w[i] > 0)) continue;
     for (let a = 0; a < q; a++) {
@@ -37,15 +37,28 @@ export function estimate(value: number | null, se: number | null, dof: number): 
   const v = finiteOrNull(value);
   const s = finiteOrNull(se);
   const t = t975(dof);
-  const ci95: [number, number] | null =
-    v !== null && s !== null && t !== null ? [v - t * s, v + t * s] : null;
-  return { value: v, se: s, ci95: ci95 && ci95.every(Number.isFinite) ? ci95 : null };
+  if (v === null || s === null || t === null) return { value: v, se: s, ci95: null };
+  const a = v - t * s;
+  const b = v + t * s;
+  return { value: v, se: s, ci95: Number.isFinite(a) && Number.isFinite(b) ? [a, b] : null };
 }
 
 /** gᵀ·C·g for a gradient over the q free parameters. */
 export function quadraticForm(g: ArrayLike<number>, C: ArrayLike<number>, q: number): number {
   let s = 0;
   for (let a = 0; a < q; a++) for (let b = 0; b < q; b++) s += g[a] * C[a * q + b] * g[b];
+  return s;
+}
+
+/** gᵀ·C·g where g is indexed by model parameter and C by the free parameters `free`. */
+export function quadraticFormOver(
+  g: ArrayLike<number>,
+  C: ArrayLike<number>,
+  free: readonly number[],
+): number {
+  const q = free.length;
+  let s = 0;
+  for (let a = 0; a < q; a++) for (let b = 0; b < q; b++) s += g[free[a]] * C[a * q + b] * g[free[b]];
   return s;
 }
 
@@ -57,7 +70,7 @@ export function deltaSE(
   fn: (theta: Float64Array) => number | null,
   theta: ArrayLike<number>,
   free: readonly number[],
-  cov: Float64Array | null,
+  cov: ArrayLike<number> | null,
 ): number | null {
   if (!cov) return null;
   const q = free.length;

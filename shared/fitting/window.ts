@@ -4,7 +4,7 @@
 // bounded at the pKa (v = V/2 at pH = pKa). Other models: numerically on the fitted curve.
 
 import { bellHalfWidth, bellPeak } from './models/bell';
-import { valueAt, type PhModel } from './models/types';
+import { pow10, valueAt, type PhModel } from './models/types';
 import { crossing, numericOptimum } from './optimum';
 
 export interface CurveShape {
@@ -79,27 +79,29 @@ export function shapeGradients(
   theta: ArrayLike<number>,
   determined: readonly boolean[],
   free: readonly number[],
-): Record<ShapeKey, Float64Array | null> {
+): Record<ShapeKey, number[] | null> {
   const p = model.names.length;
-  const out = {} as Record<ShapeKey, Float64Array | null>;
+  const out = {} as Record<ShapeKey, number[] | null>;
   if (model.id === 'bell' && determined[1] && determined[2]) {
     const delta = theta[2] - theta[1];
-    const S = Math.pow(10, delta / 2) + 4;
+    const up = pow10(delta / 2);
+    const S = up + 4;
     const root = Math.sqrt(S * S - 4);
     const x = (S + root) / 2;
-    const hw1 = ((1 + S / root) * Math.pow(10, delta / 2)) / (4 * x);
-    const c = Math.pow(10, -delta / 2);
+    const hw1 = ((1 + S / root) * up) / (4 * x);
+    const c = 1 / up;
     const dPeak = (theta[0] * c * Math.LN10) / ((1 + 2 * c) * (1 + 2 * c));
-    out.pHopt = Float64Array.of(0, 0.5, 0.5);
-    out.peak = Float64Array.of(1 / (1 + 2 * c), -dPeak, dPeak);
-    out.lo = Float64Array.of(0, 0.5 + hw1, 0.5 - hw1);
-    out.hi = Float64Array.of(0, 0.5 - hw1, 0.5 + hw1);
-    out.width = Float64Array.of(0, -2 * hw1, 2 * hw1);
+    out.pHopt = [0, 0.5, 0.5];
+    out.peak = [1 / (1 + 2 * c), -dPeak, dPeak];
+    out.lo = [0, 0.5 + hw1, 0.5 - hw1];
+    out.hi = [0, 0.5 - hw1, 0.5 + hw1];
+    out.width = [0, -2 * hw1, 2 * hw1];
     return out;
   }
   const base = curveShape(model, theta, determined);
   const t = Float64Array.from(theta);
-  for (const key of SHAPE_KEYS) out[key] = shapeValue(base, key) === null ? null : new Float64Array(p);
+  for (const key of SHAPE_KEYS)
+    out[key] = shapeValue(base, key) === null ? null : new Array<number>(p).fill(0);
   for (const j of free) {
     const h = 6e-6 * Math.max(Math.abs(theta[j]), 1);
     t[j] = theta[j] + h;

@@ -43,20 +43,30 @@ function probRuns(r: number, n1: number, n2: number): number {
 }
 
 /**
- * Runs test on residuals ordered by x (ties keep their input order; zero residuals are left
- * out). Returns null when there are fewer than two signs of either kind.
+ * Runs test on residuals ordered by x (ties keep their input order; zero residuals, and points
+ * whose weight is 0 when weights are given, are left out). Returns null when there are fewer
+ * than two signs of either kind.
  */
-export function runsTest(x: ArrayLike<number>, residuals: ArrayLike<number>): RunsTest | null {
+export function runsTest(
+  x: ArrayLike<number>,
+  residuals: ArrayLike<number | null>,
+  weights?: ArrayLike<number>,
+): RunsTest | null {
   const order: number[] = [];
-  for (let i = 0; i < residuals.length; i++)
-    if (residuals[i] !== 0 && Number.isFinite(residuals[i])) order.push(i);
-  order.sort((a, b) => x[a] - x[b] || a - b);
+  let sorted = true;
+  for (let i = 0; i < residuals.length; i++) {
+    const r = residuals[i];
+    if (r === null || r === 0 || !Number.isFinite(r) || (weights && !(weights[i] > 0))) continue;
+    if (order.length > 0 && x[i] < x[order[order.length - 1]]) sorted = false;
+    order.push(i);
+  }
+  if (!sorted) order.sort((a, b) => x[a] - x[b] || a - b);
   let positive = 0;
   let negative = 0;
   let runs = 0;
   let last = 0;
   for (const i of order) {
-    const s = residuals[i] > 0 ? 1 : -1;
+    const s = (residuals[i] as number) > 0 ? 1 : -1;
     if (s > 0) positive++;
     else negative++;
     if (s !== last) runs++;
