@@ -6,6 +6,8 @@ export class ImportError extends Error {
   readonly sheet?: string;
   readonly cell?: string;
   readonly notes?: ParseNote[];
+  /** The underlying library message, kept for logs (see ParseError.technical). */
+  technical?: string;
 
   constructor(
     code: ParseErrorCode,
@@ -26,6 +28,7 @@ export class ImportError extends Error {
     if (this.sheet !== undefined) error.sheet = this.sheet;
     if (this.cell !== undefined) error.cell = this.cell;
     if (this.notes && this.notes.length > 0) error.notes = this.notes;
+    if (this.technical !== undefined) error.technical = this.technical;
     return error;
   }
 }

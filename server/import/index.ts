@@ -23,12 +23,12 @@ export async function parseReaderFile(bytes: Uint8Array, fileName: string): Prom
     return { ok: true, value: await parse(bytes, fileName) };
   } catch (error) {
     if (error instanceof ImportError) return { ok: false, error: error.toParseError() };
-    const reason = error instanceof Error ? error.message : String(error);
     return {
       ok: false,
       error: {
         code: 'internal',
-        message: `'${fileName}' could not be read because of an unexpected problem (${reason}). Nothing was imported.`,
+        message: `'${fileName}' could not be read because of an unexpected problem in Bellwether. Nothing was imported; please send the file to your administrator.`,
+        technical: error instanceof Error ? (error.stack ?? error.message) : String(error),
       },
     };
   }

@@ -18,11 +18,12 @@ export async function readWorkbook(bytes: Uint8Array): Promise<Grid[]> {
     const buffer = Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
     await workbook.xlsx.load(buffer as unknown as Parameters<typeof workbook.xlsx.load>[0]);
   } catch (error) {
-    const reason = error instanceof Error ? error.message : String(error);
-    throw new ImportError(
+    const failure = new ImportError(
       'unreadable_workbook',
-      `The file starts like an Excel workbook (.xlsx) but could not be read (${reason}). It may be damaged or cut short; export it again.`,
+      'The file starts like an Excel workbook (.xlsx) but its content could not be read: it may be damaged, or written by a program that does not follow the xlsx format. Open it in a spreadsheet program and save it again as .xlsx, or export it as .csv.',
     );
+    failure.technical = error instanceof Error ? error.message : String(error);
+    throw failure;
   }
   const date1904 = Boolean(workbook.properties?.date1904);
   const sheets = workbook.worksheets;

@@ -129,6 +129,8 @@ export interface ParseError {
   cell?: string;
   /** Near misses seen while looking (for 'nothing_found'): incomplete grids, tables without wells. */
   notes?: ParseNote[];
+  /** The library's own words (exceljs, papaparse, JavaScript), for logs; not for the user. */
+  technical?: string;
 }
 
 export type ParseResult = { ok: true; value: ParsedReaderFile } | { ok: false; error: ParseError };
