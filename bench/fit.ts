@@ -20,7 +20,10 @@ const line = (s: string): void => void process.stdout.write(`${s}\n`);
 
 type Ref = { id: string; V: number; pKa1: number; pKa2: number };
 const exact = new Map(
-  (JSON.parse(readFileSync(join(fixtures, 'bell-5000.exact.json'), 'utf8')).results as Ref[]).map((r) => [r.id, r]),
+  (JSON.parse(readFileSync(join(fixtures, 'bell-5000.exact.json'), 'utf8')).results as Ref[]).map((r) => [
+    r.id,
+    r,
+  ]),
 );
 
 function timed(command: string, args: string[]) {
@@ -33,7 +36,9 @@ function timed(command: string, args: string[]) {
 
 // 1–2. whole process and loop, through the installed entry point (bin/bellwether.js registers tsx)
 const file = join(fixtures, 'bell-5000.json');
-const startup = median(Array.from({ length: REPEATS }, () => timed(process.execPath, ['bin/bellwether.js', '--help']).seconds));
+const startup = median(
+  Array.from({ length: REPEATS }, () => timed(process.execPath, ['bin/bellwether.js', '--help']).seconds),
+);
 const runs = Array.from({ length: REPEATS }, () =>
   timed(process.execPath, ['bin/bellwether.js', 'fit', file, '--model', 'bell', '--timing']),
 );
@@ -47,22 +52,30 @@ let agree = 0;
 for (const r of results) {
   const e = exact.get(r.id);
   if (!e || r.V === null || r.pKa1 === null || r.pKa2 === null) continue;
-  const worst = Math.max(...(['V', 'pKa1', 'pKa2'] as const).map((k) => Math.abs(r[k] - e[k]) / Math.abs(e[k])));
+  const worst = Math.max(
+    ...(['V', 'pKa1', 'pKa2'] as const).map((k) => Math.abs(r[k] - e[k]) / Math.abs(e[k])),
+  );
   if (worst <= 1e-6) agree++;
 }
 
 line(`bell model, bell-5000.json (${n} profiles), median of ${REPEATS} runs`);
 line(`  fitting loop:   ${median(loopRates)} fits/s        (scipy ≈ 1,280; R ≈ 510)`);
 line(`  whole process:  ${Math.round(n / whole)} fits/s  (${whole.toFixed(2)} s; scipy ≈ 1,100; R ≈ 405)`);
-line(`  ratio to scipy: loop ${(median(loopRates) / 1280).toFixed(1)}×, whole process ${(n / whole / 1100).toFixed(1)}×`);
-line(`  tsx start-up alone (bin/bellwether.js --help): ${startup.toFixed(2)} s; via npm run: ${viaNpm.toFixed(2)} s for the whole fit`);
+line(
+  `  ratio to scipy: loop ${(median(loopRates) / 1280).toFixed(1)}×, whole process ${(n / whole / 1100).toFixed(1)}×`,
+);
+line(
+  `  tsx start-up alone (bin/bellwether.js --help): ${startup.toFixed(2)} s; via npm run: ${viaNpm.toFixed(2)} s for the whole fit`,
+);
 line(`  whole process without the start-up: ${Math.round(n / (whole - startup))} fits/s`);
-line(`  agreement with bell-5000.exact.json: ${agree}/${exact.size} within 1e-6 (${((100 * agree) / exact.size).toFixed(2)} %)`);
+line(
+  `  agreement with bell-5000.exact.json: ${agree}/${exact.size} within 1e-6 (${((100 * agree) / exact.size).toFixed(2)} %)`,
+);
 
 // 3. bootstrap
-const s00000 = (JSON.parse(readFileSync(join(fixtures, 'bell-200.json'), 'utf8')).datasets as { id: string }[]).find(
-  (d) => d.id === 's1-00000',
-);
+const s00000 = (
+  JSON.parse(readFileSync(join(fixtures, 'bell-200.json'), 'utf8')).datasets as { id: string }[]
+).find((d) => d.id === 's1-00000');
 const bootTimes: number[] = [];
 for (let i = 0; i < 5; i++) {
   const t0 = performance.now();
@@ -70,7 +83,9 @@ for (let i = 0; i < 5; i++) {
   bootTimes.push((performance.now() - t0) / 1000);
   if (!r.ok || r.value.bootstrap?.resamples !== 1000) throw new Error('bootstrap failed');
 }
-line(`bootstrap, 1,000 resamples of bell-200 s1-00000 (fit included), median of 5: ${median(bootTimes).toFixed(3)} s (target < 0.2 s)`);
+line(
+  `bootstrap, 1,000 resamples of bell-200 s1-00000 (fit included), median of 5: ${median(bootTimes).toFixed(3)} s (target < 0.2 s)`,
+);
 
 // 4. NIST digits: Bellwether's solver and ml-levenberg-marquardt
 let worstParam = 15;
@@ -112,9 +127,15 @@ for (const name of NIST_NAMES) {
   }
 }
 line(`NIST StRD, ${NIST_NAMES.length} problems × 2 starts, Bellwether (central differences):`);
-line(`  fewest digits: parameters ${worstParam.toFixed(1)}, standard deviations ${worstSD.toFixed(1)}, RSS ${worstRSS.toFixed(1)}`);
-line(`ml-levenberg-marquardt 5.1 on the same 20 runs: ${mlDefaultPass}/20 reach 6 digits with its defaults, ${mlPass}/20 with tight settings`);
-line(`  (tight: central differences, relative steps 1e-6, damping 1e-3, 10,000 iterations; median ${median(mlTimes).toFixed(0)} ms per run)`);
+line(
+  `  fewest digits: parameters ${worstParam.toFixed(1)}, standard deviations ${worstSD.toFixed(1)}, RSS ${worstRSS.toFixed(1)}`,
+);
+line(
+  `ml-levenberg-marquardt 5.1 on the same 20 runs: ${mlDefaultPass}/20 reach 6 digits with its defaults, ${mlPass}/20 with tight settings`,
+);
+line(
+  `  (tight: central differences, relative steps 1e-6, damping 1e-3, 10,000 iterations; median ${median(mlTimes).toFixed(0)} ms per run)`,
+);
 
 // ml-levenberg-marquardt on bell-200 from scipy's starting values, analytic Jacobian
 type Data = { id: string; pH: number[]; v: number[] };
@@ -123,15 +144,23 @@ const scipy200 = JSON.parse(readFileSync(join(fixtures, 'bell-200.scipy.json'), 
   start: { V: number; pKa1: number; pKa2: number };
 }[];
 const exact200 = new Map(
-  (JSON.parse(readFileSync(join(fixtures, 'bell-200.exact.json'), 'utf8')).results as Ref[]).map((r) => [r.id, r]),
+  (JSON.parse(readFileSync(join(fixtures, 'bell-200.exact.json'), 'utf8')).results as Ref[]).map((r) => [
+    r.id,
+    r,
+  ]),
 );
-const bell = ([V, a, b]: number[]) => (x: number) => V / (1 + 10 ** (a - x) + 10 ** (x - b));
-const bellJacobian = ([V, a, b]: number[]) => (x: number) => {
-  const u = 10 ** (a - x);
-  const w = 10 ** (x - b);
-  const D = 1 + u + w;
-  return [1 / D, (-V * u * Math.LN10) / (D * D), (V * w * Math.LN10) / (D * D)];
-};
+const bell =
+  ([V, a, b]: number[]) =>
+  (x: number) =>
+    V / (1 + 10 ** (a - x) + 10 ** (x - b));
+const bellJacobian =
+  ([V, a, b]: number[]) =>
+  (x: number) => {
+    const u = 10 ** (a - x);
+    const w = 10 ** (x - b);
+    const D = 1 + u + w;
+    return [1 / D, (-V * u * Math.LN10) / (D * D), (V * w * Math.LN10) / (D * D)];
+  };
 let mlAgree = 0;
 const t0 = performance.now();
 data200.forEach((d, i) => {
@@ -151,7 +180,9 @@ data200.forEach((d, i) => {
     values = null;
   }
   if (!e || !values) return;
-  const worst = Math.max(...[e.V, e.pKa1, e.pKa2].map((c, j) => Math.abs((values as number[])[j] - c) / Math.abs(c)));
+  const worst = Math.max(
+    ...[e.V, e.pKa1, e.pKa2].map((c, j) => Math.abs((values as number[])[j] - c) / Math.abs(c)),
+  );
   if (worst <= 1e-6) mlAgree++;
 });
 const mlRate = data200.length / ((performance.now() - t0) / 1000);

@@ -15,11 +15,16 @@ let failed = 0;
 for (const file of files) {
   process.stdout.write(`\n== bench/${file}\n`);
   const started = Date.now();
-  const result = spawnSync(process.execPath, ['--import', 'tsx', join(here, file)], { cwd: root, stdio: 'inherit' });
+  const result = spawnSync(process.execPath, ['--import', 'tsx', join(here, file)], {
+    cwd: root,
+    stdio: 'inherit',
+  });
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   if (result.status !== 0) {
     failed++;
-    process.stdout.write(`bench/${file} failed (exit ${result.status ?? result.signal}) after ${seconds} s\n`);
+    process.stdout.write(
+      `bench/${file} failed (exit ${result.status ?? result.signal}) after ${seconds} s\n`,
+    );
   } else {
     process.stdout.write(`(bench/${file}: ${seconds} s)\n`);
   }
