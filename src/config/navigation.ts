@@ -7,6 +7,11 @@ export type NavEntry = { label: string; href: string; permission?: Permission; e
 
 export const navigation: NavEntry[] = [
   { label: 'Home', href: paths.home.href(), end: true },
+  { label: 'Studies', href: paths.studies.href(), permission: 'records:read' },
+  { label: 'Enzymes', href: paths.enzymes.href(), permission: 'records:read' },
+  { label: 'Assays', href: paths.assays.href(), permission: 'records:read' },
+  { label: 'Buffer series', href: paths.bufferSeriesList.href(), permission: 'records:read' },
+  { label: 'Buffer library', href: paths.buffers.href(), permission: 'buffers:read' },
   { label: 'Teams', href: paths.teams.href() },
   { label: 'People', href: paths.people.href(), permission: 'users:read' },
   { label: 'Outbox', href: paths.outbox.href(), permission: 'outbox:read' },

@@ -39,4 +39,46 @@ export const paths = {
     href: (messageId: string) => `/admin/outbox/${encodeURIComponent(messageId)}`,
   },
   audit: { path: '/admin/audit', href: () => '/admin/audit' },
+  // Records (issue 4): enzymes, assays, studies, the buffer library and buffer series.
+  enzymes: { path: '/enzymes', href: () => '/enzymes' },
+  enzyme: { path: '/enzymes/:enzymeId', href: (id: string) => `/enzymes/${encodeURIComponent(id)}` },
+  assays: { path: '/assays', href: () => '/assays' },
+  assayNew: { path: '/assays/new', href: () => '/assays/new' },
+  assay: { path: '/assays/:assayId', href: (id: string) => `/assays/${encodeURIComponent(id)}` },
+  assayEdit: {
+    path: '/assays/:assayId/edit',
+    href: (id: string) => `/assays/${encodeURIComponent(id)}/edit`,
+  },
+  studies: { path: '/studies', href: () => '/studies' },
+  studyNew: {
+    path: '/studies/new',
+    href: (from: { bufferSeriesId?: string } = {}) =>
+      from.bufferSeriesId
+        ? `/studies/new?bufferSeriesId=${encodeURIComponent(from.bufferSeriesId)}`
+        : '/studies/new',
+  },
+  study: { path: '/studies/:studyId', href: (id: string) => `/studies/${encodeURIComponent(id)}` },
+  studyBuffers: {
+    path: '/studies/:studyId/buffers',
+    href: (id: string) => `/studies/${encodeURIComponent(id)}/buffers`,
+  },
+  buffers: { path: '/buffers', href: () => '/buffers' },
+  bufferNew: { path: '/buffers/new', href: () => '/buffers/new' },
+  buffer: { path: '/buffers/:bufferId', href: (id: string) => `/buffers/${encodeURIComponent(id)}` },
+  bufferEdit: {
+    path: '/buffers/:bufferId/edit',
+    href: (id: string) => `/buffers/${encodeURIComponent(id)}/edit`,
+  },
+  bufferSeriesList: { path: '/buffer-series', href: () => '/buffer-series' },
+  bufferSeriesNew: {
+    path: '/buffer-series/new',
+    href: (forStudy: { studyId?: string } = {}) =>
+      forStudy.studyId
+        ? `/buffer-series/new?studyId=${encodeURIComponent(forStudy.studyId)}`
+        : '/buffer-series/new',
+  },
+  bufferSeries: {
+    path: '/buffer-series/:seriesId',
+    href: (id: string) => `/buffer-series/${encodeURIComponent(id)}`,
+  },
 } as const;
