@@ -3,7 +3,7 @@
 import { kineticWells, readTemperatures, temperatureNote, type DetectContext, type Draft } from './draft';
 import { ImportError, where } from './errors';
 import { cellRef, cellText, columnLetters, overlaps, type Grid, type Region } from './grid';
-import { TEMPERATURE_HEADER } from './find-long-tables';
+import { TEMPERATURE_HEADER } from './headers';
 import { isTimeHeader, readTime, unitFromHeader } from './time';
 import { buildTimeAxis, type TimeCell } from './time-axis';
 import { formatHolding, parseWellName, wellName, type WellPosition } from './wells';

@@ -3,7 +3,7 @@
 import { kineticWells, readTemperatures, temperatureNote, type DetectContext, type Draft } from './draft';
 import { ImportError, where } from './errors';
 import { cellRef, cellText, inRegion, overlaps, type Grid, type Region } from './grid';
-import { TEMPERATURE_HEADER } from './find-long-tables';
+import { TEMPERATURE_HEADER } from './headers';
 import { parseNumberText, readMeasure } from './measure';
 import { readTime, unitFromHeader } from './time';
 import type { ParseNote } from './types';

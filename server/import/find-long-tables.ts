@@ -1,39 +1,15 @@
 // (c) Long tables: one row per well (or per well and time) under a header row naming a Well
 // column and one or more value columns ("Value", "Absorbance 405 nm", "OD600", "RFU", ...),
 // optionally a Time column (the table is then a time course) and a temperature column.
-import {
-  kineticWells,
-  readTemperatures,
-  temperatureNote,
-  type DetectContext,
-  type Draft,
-  type EndpointContent,
-} from './draft';
+import type { DetectContext, Draft, EndpointContent } from './draft';
 import { ImportError, where } from './errors';
-import { cellRef, cellText, overlaps, type Cell, type Region } from './grid';
+import { cellRef, cellText, overlaps, type Region } from './grid';
+import { BARE_VALUE_HEADER, TEMPERATURE_HEADER, VALUE_HEADER, WELL_HEADER } from './headers';
+import { longKineticContent, readIndex, type LongRow } from './long-kinetic';
 import { readMeasure } from './measure';
 import { isTimeHeader, readTime, unitFromHeader } from './time';
-import { resolveTimes, type TimeCell } from './time-axis';
-import {
-  formatHolding,
-  looksLikeWellName,
-  parseWellName,
-  plateWells,
-  wellName,
-  type WellPosition,
-} from './wells';
-
-export const WELL_HEADER = /^well(?:\s*(?:id|name|position|pos\.?|no\.?))?$/i;
-const VALUE_HEADER =
-  /^(?:values?|abs(?:orbance)?|od|optical density|fluorescence|fluo|rfu|rlu|signal|results?|raw(?: data)?|measurements?|reading|intensity|luminescence|counts?)(?![a-z])/i;
-const BARE_VALUE_HEADER = /^(?:values?|results?|measurements?|reading|raw(?: data)?)$/i;
-export const TEMPERATURE_HEADER = /^(?:temp(?:erature)?\b|t\s*°|°c\b)|\btemperature\b/i;
-
-interface Row {
-  row: number;
-  position: WellPosition;
-  time?: TimeCell;
-}
+import type { TimeCell } from './time-axis';
+import { formatHolding, looksLikeWellName, parseWellName, plateWells, wellName } from './wells';
 
 export function findLongTables(context: DetectContext): Draft[] {
   const { grid, claimed } = context;
@@ -60,11 +36,12 @@ export function findLongTables(context: DetectContext): Draft[] {
     };
     if (claimed.some((taken) => overlaps(taken, region))) return;
     claimed.push(region);
+    const reads =
+      timeColumn >= 0 ? readIndex(context, rows, cellRef(headerRow, timeColumn), temperatureColumn) : null;
     for (const valueColumn of valueColumns) {
-      const content =
-        timeColumn >= 0
-          ? kineticContent(context, rows, valueColumn, temperatureColumn, cellRef(headerRow, timeColumn))
-          : endpointContent(context, rows, valueColumn, wellColumn);
+      const content = reads
+        ? longKineticContent(context, rows, reads, valueColumn)
+        : endpointContent(context, rows, valueColumn, wellColumn);
       const headerText = header[valueColumn];
       drafts.push({
         layout: 'long-table',
@@ -78,8 +55,13 @@ export function findLongTables(context: DetectContext): Draft[] {
   return drafts;
 }
 
-function readRows({ grid }: DetectContext, headerRow: number, wellColumn: number, timeColumn: number): Row[] {
-  const rows: Row[] = [];
+function readRows(
+  { grid }: DetectContext,
+  headerRow: number,
+  wellColumn: number,
+  timeColumn: number,
+): LongRow[] {
+  const rows: LongRow[] = [];
   const unit = timeColumn >= 0 ? unitFromHeader(grid.text(headerRow, timeColumn) ?? '') : null;
   for (let row = headerRow + 1; row < grid.rowCount; row++) {
     const text = grid.text(row, wellColumn);
@@ -97,7 +79,7 @@ function readRows({ grid }: DetectContext, headerRow: number, wellColumn: number
       }
       break;
     }
-    const entry: Row = { row, position };
+    const entry: LongRow = { row, position };
     if (timeColumn >= 0) entry.time = readTimeCell(grid, row, timeColumn, unit);
     rows.push(entry);
   }
@@ -125,7 +107,7 @@ function readTimeCell(
 
 function endpointContent(
   { grid }: DetectContext,
-  rows: Row[],
+  rows: LongRow[],
   valueColumn: number,
   wellColumn: number,
 ): EndpointContent {
@@ -159,64 +141,4 @@ function duplicateWell(sheet: string, name: string, firstRow: number, row: numbe
     `${where(sheet, cell)}well ${name} appears a second time (first on row ${firstRow + 1}) in a table without a time column; each well needs one value.`,
     { sheet, cell },
   );
-}
-
-function kineticContent(
-  context: DetectContext,
-  rows: Row[],
-  valueColumn: number,
-  temperatureColumn: number,
-  timeHeader: string,
-): Draft['content'] {
-  const { grid, notes } = context;
-  // Many rows share one time in a long table: resolve every cell, then index the distinct times.
-  const { seconds, spelling } = resolveTimes(
-    rows.map((r) => r.time!),
-    grid.name,
-    timeHeader,
-    notes,
-  );
-  const times = [...new Set(seconds)].sort((a, b) => a - b);
-  const indexOfTime = new Map(times.map((t, i) => [t, i]));
-  const byWell = new Map<string, { position: WellPosition; cells: (Cell | undefined)[] }>();
-  const temperatureCells: (Cell | undefined)[] = new Array(times.length).fill(undefined);
-  const seen = new Map<string, number>();
-  rows.forEach(({ row, position }, i) => {
-    const name = wellName(position);
-    const index = indexOfTime.get(seconds[i])!;
-    const earlier = seen.get(`${name}@${index}`);
-    if (earlier !== undefined) {
-      const cell = cellRef(row, valueColumn);
-      throw new ImportError(
-        'duplicate_time',
-        `${where(grid.name, cell)}well ${name} has two values at ${times[index]} s (rows ${earlier + 1} and ${row + 1}).`,
-        { sheet: grid.name, cell },
-      );
-    }
-    seen.set(`${name}@${index}`, row);
-    let entry = byWell.get(name);
-    if (!entry) {
-      entry = { position, cells: new Array<Cell | undefined>(times.length).fill(undefined) };
-      byWell.set(name, entry);
-    }
-    entry.cells[index] = grid.get(row, valueColumn);
-    if (temperatureColumn >= 0) temperatureCells[index] ??= grid.get(row, temperatureColumn);
-  });
-  const temperature = temperatureColumn >= 0 ? readTemperatures(temperatureCells) : null;
-  if (temperature) {
-    const ref = cellRef(rows[0].row - 1, temperatureColumn);
-    notes.push({
-      sheet: grid.name,
-      cell: ref,
-      message: `${where(grid.name, ref)}${temperatureNote(`the temperature column '${grid.text(rows[0].row - 1, temperatureColumn)}'`, temperature)}`,
-    });
-  }
-  return {
-    kind: 'kinetic',
-    plateFormat: formatHolding(rows.map((r) => r.position)),
-    times_s: times,
-    timeSpelling: spelling,
-    temperature,
-    ...kineticWells([...byWell.values()]),
-  };
 }
