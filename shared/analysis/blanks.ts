@@ -2,7 +2,8 @@
  * Step 2: blank correction (SCIENCE.md §3.1): from each sample subtract the mean of the blank wells
  * (no enzyme) of the same pH point, on the same plate and in the same buffer:
  *   corrected = x − b̄,   u(corrected) = √(u(x)² + s_b²/n_b)
- * (shared/plate blank.ts: one mean is subtracted, so its standard error counts, not the wells' SD).
+ * (shared/plate blank.ts: one mean is subtracted, so its standard error counts, not the wells' SD);
+ * u(x) is a kinetic rate's slope SE. End points have no u(x) and get no SE (see below).
  * When that group is empty the nearest stand-in is used and flagged: the same pH on the same plate in
  * any buffer, then the same pH (and buffer) on other plates. No blank at the pH at all: null, flagged.
  * Excluded blanks and blanks without a signal are left out. pH points match to 0.01 (as the map checks).
@@ -99,9 +100,9 @@ export function correctBlanks(rows: WellRow[]): BlankGroup[] {
     row.blank = m.blank;
     for (const f of m.flags) if (f !== 'missing_values') row.flags.push(f);
     row.corrected = num(row.signal - m.blank.mean);
-    const u =
-      row.signalSe === null && m.blank.se === null ? null : Math.hypot(row.signalSe ?? 0, m.blank.se ?? 0);
-    row.correctedSe = num(u);
+    // A single end-point read has no error of its own: a partial error (the blank's alone) would look
+    // precise, so none is given, and the spread of the replicates tells how well the point is known.
+    row.correctedSe = row.signalSe === null ? null : num(Math.hypot(row.signalSe, m.blank.se ?? 0));
   }
   return book.used();
 }

@@ -69,7 +69,8 @@ function byStandardCurve(
   )
     row.flags.push('extrapolated');
   const r = rateFromSignalSlope(curve, row.corrected!, row.correctedSe);
-  return r.ok ? { value: r.value.rate, se: r.value.se } : null;
+  // no error of its own (an end point): no error after conversion either (blanks.ts says why)
+  return r.ok ? { value: r.value.rate, se: row.correctedSe === null ? null : r.value.se } : null;
 }
 
 export function convertRow(

@@ -128,7 +128,13 @@ export function replicateCvs(rows: readonly WellRow[]): ReplicateCv[] {
   return out.sort((a, b) => a.variantId.localeCompare(b.variantId) || a.pH - b.pH);
 }
 
-/** Trends on sample activities centred on their variant × pH point mean, so only position effects remain. */
+/**
+ * Trends on sample activities centred on their variant × pH point mean (shared/plate centreByGroup, then
+ * plateTrends), so that the plate's design does not read as an artefact. Only position effects inside
+ * replicate groups remain: a gradient along the direction in which the groups are laid out cannot be
+ * told from the design, and with replicates side by side the test keeps only part of its power
+ * (the spread of the column index between groups dilutes the slope).
+ */
 function trendsOf(rows: readonly WellRow[], plate: PlateInput): PlateQc['trends'] {
   const samples = rows.filter(
     (r) =>

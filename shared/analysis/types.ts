@@ -169,7 +169,7 @@ export interface WellRow extends WellRef {
   /** Standards: the mean read (signal without time), the x of the standard curve's y. */
   standardSignal: number | null;
   blank: BlankUsed | null;
-  /** signal − blank mean, in units.signal; SE √(SE_signal² + SE_blank²). */
+  /** signal − blank mean, in units.signal; SE √(SE_signal² + SE_blank²) for rates, null for end points. */
   corrected: number | null;
   correctedSe: number | null;
   /** Product formed per minute (or product formed), in units.rate. */
