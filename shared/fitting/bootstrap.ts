@@ -4,11 +4,12 @@
 // original estimate. Percentile 95 % intervals of the optimum and the half-activity window follow.
 // Seeded: the same seed gives the same intervals.
 
+import type { FitContext } from './describe';
 import { DETERMINED_MARGIN, fitSpec, type FitSpec } from './fit-core';
 import type { PhModel } from './models';
 import type { PhData } from './ph-data';
 import { mulberry32, randomIndex } from './prng';
-import type { Interval } from './types';
+import type { Interval, ProfileFit } from './types';
 import { curveShape } from './window';
 
 export interface BootstrapDraws {
@@ -90,4 +91,31 @@ export function percentile95(values: readonly number[], scale = 1): Interval | n
     return Number.isFinite(x * scale) ? x * scale : null;
   };
   return [at(0.025), at(0.975)];
+}
+
+/** Runs the bootstrap and writes its percentile intervals into the report. */
+export function attachBootstrap(fit: ProfileFit, ctx: FitContext, resamples: number, seed: number): void {
+  const { model, data, core, free, determined } = ctx;
+  if (!core.converged || ctx.dof <= 0) return;
+  const fitted = Float64Array.from(ctx.fitted); // ctx.fitted lives in a scratch buffer
+  const draws = residualBootstrap(
+    model,
+    data,
+    core.spec,
+    core.theta,
+    fitted,
+    determined,
+    free.length,
+    resamples,
+    seed,
+  );
+  fit.pHopt.boot95 = percentile95(draws.pHopt);
+  fit.window.lo.boot95 = percentile95(draws.lo);
+  fit.window.hi.boot95 = percentile95(draws.hi);
+  fit.window.width.boot95 = percentile95(draws.width);
+  model.names.forEach((name, j) => {
+    if (determined[j] && free.includes(j))
+      fit.parameters[name].boot95 = percentile95(draws.params[j], ctx.unit(j));
+  });
+  fit.bootstrap = { resamples, seed, undetermined: draws.undetermined };
 }

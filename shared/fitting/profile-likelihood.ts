@@ -6,10 +6,13 @@
 // follows the curvature of the model: for pKa values near the edge of the data it is lopsided,
 // and when the profile never rises enough before the pKa leaves the data that end is open (null).
 
+import type { FitContext } from './describe';
 import { fitSpec, type FitSpec } from './fit-core';
 import type { PhModel } from './models';
 import type { PhData } from './ph-data';
-import type { Interval } from './types';
+import { PH_LIMITS } from './ph-data';
+import { timesOrNull } from './result';
+import type { Interval, ProfileFit } from './types';
 
 export interface ProfileTarget {
   /** ψ = aᵀθ */
@@ -96,4 +99,52 @@ export function profileInterval(
   };
 
   return [side(-1), side(1)];
+}
+
+/** A successive pKa difference (Δ for the bell) as the linear form aᵀθ. */
+export interface Gap {
+  names: [string, string];
+  delta: number;
+  se: number | null;
+  a: number[];
+}
+
+/** Profile-likelihood intervals of every fitted parameter and of Δ, written into the report. */
+export function attachProfiles(fit: ProfileFit, ctx: FitContext, deltaGap: Gap | null): void {
+  const { model, data, core, s2, t, ssr } = ctx;
+  if (s2 === null || !(s2 > 0) || t === null || !core.converged) return;
+  const p = model.names.length;
+  const box = { lo: data.lo - 3, hi: data.hi + 3 };
+  const run = (target: ProfileTarget): Interval =>
+    profileInterval(model, data, core.spec, core.theta, ssr, s2, t, target);
+  for (const j of ctx.free) {
+    if (!ctx.determined[j]) continue;
+    const a = new Array<number>(p).fill(0);
+    a[j] = 1;
+    const estimate = core.theta[j];
+    const se = ctx.cov ? Math.sqrt(ctx.cov[ctx.at[j] * ctx.free.length + ctx.at[j]]) : null;
+    const far = 1e3 * (se ?? Math.max(1, Math.abs(estimate)));
+    const isPKa = j >= model.nLinear;
+    const iv = run({
+      a,
+      estimate,
+      se,
+      lower: { limit: isPKa ? Math.max(box.lo, PH_LIMITS.min - 3) : estimate - far, closed: false },
+      upper: { limit: isPKa ? box.hi : estimate + far, closed: false },
+    });
+    fit.parameters[model.names[j]].profile95 = [
+      timesOrNull(iv[0], ctx.unit(j)),
+      timesOrNull(iv[1], ctx.unit(j)),
+    ];
+  }
+  if (fit.delta && deltaGap) {
+    // Δ ≥ 0 is enforced, so its lower end can be the bound itself
+    fit.delta.profile95 = run({
+      a: deltaGap.a,
+      estimate: deltaGap.delta,
+      se: deltaGap.se,
+      lower: { limit: 0, closed: true },
+      upper: { limit: box.hi - box.lo, closed: false },
+    });
+  }
 }

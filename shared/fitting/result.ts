@@ -36,6 +36,11 @@ export function finiteOrNull(x: number | null | undefined): number | null {
   return x === null || x === undefined || !Number.isFinite(x) ? null : x === 0 ? 0 : x;
 }
 
+/** x·k, or null when x is null or the product is not finite. */
+export function timesOrNull(x: number | null, k: number): number | null {
+  return x === null ? null : finiteOrNull(x * k);
+}
+
 /** Last-resort guard for the public entry points: an unexpected exception becomes a typed error. */
 export function guarded<T>(run: () => Result<T>): Result<T> {
   try {
