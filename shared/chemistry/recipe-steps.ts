@@ -48,7 +48,7 @@ export function recipeCautions(system: BufferSystem, k: number): string[] {
   const slope = system.ionizations[k].dpKadT;
   if (slope !== null && Math.abs(slope) >= LARGE_DPKA_DT) {
     cautions.push(
-      `${system.name} changes pKa by ${slope.toFixed(4)} per °C: set the pH at the assay temperature (SCIENCE.md §2.6).`,
+      `${system.name} changes pKa by ${slope.toFixed(4)} per °C: set the pH at the assay temperature.`,
     );
   }
   cautions.push(SAFETY_CAUTION);

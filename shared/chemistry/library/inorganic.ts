@@ -48,7 +48,7 @@ const phosphoricAcid = form('phosphoric-acid', 'Phosphoric acid', 'H3PO4', {
 });
 const phosphateCautions = [
   'Precipitates with Ca²⁺, Mg²⁺ and other polyvalent metal ions.',
-  'Phosphate activates or inhibits some enzymes: check with an overlap point (SCIENCE.md §2.6).',
+  'Phosphate activates or inhibits some enzymes: check with an overlap point.',
   'pK2 falls strongly with ionic strength: compute I per point and keep it constant with salt.',
 ];
 
