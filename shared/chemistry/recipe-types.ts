@@ -1,4 +1,5 @@
 // Types of the recipe calculation (inputs and results are plain JSON data).
+import type { ActivityModel } from './activity';
 import type { Conditions } from './equilibrium';
 import type { BufferSystem, Salt, Titrant } from './library';
 import type { Composition, StrongIon } from './solution';
@@ -54,20 +55,31 @@ export interface Recipe {
   temperatureC: number;
   totalConc: number;
   volume: number;
-  activityModel: string;
+  activityModel: ActivityModel;
+  /** The step worked on: pKa at 25 °C, thermodynamic pKa at the temperature, pK″ at the final I. */
   ionization: { index: number; label: string; pKa25: number; pKa: number; pKapp: number };
+  /** Every step: thermodynamic pKa at the temperature, and pK″ at the final I. */
   pKa: number[];
   pKapp: number[];
+  /** Self-consistent ionic strength of the final solution, mol/L. */
   ionicStrength: number;
   components: RecipeComponent[];
   /** Final strong-ion concentrations (counter-ions, titrant ions, salt), mol/L. */
   counterIons: Partial<Record<StrongIon, number>>;
+  /** Buffer species, most protonated first, mol/L. */
   species: { charge: number; conc: number }[];
+  /** Fraction of the buffer beyond the worked step's acid form (α of Henderson–Hasselbalch). */
   baseFraction: number;
+  /** β in mol/L per pH unit, at the final I. */
   capacity: { total: number; water: number; buffer: number };
+  /** Salt added (NaCl or KCl), mol/L. */
   saltConc: number;
+  /** Totals of the final solution, for mixing, titration and temperature-shift calculations. */
   composition: Composition;
+  /** The written procedure of the recipe sheet. */
   steps: string[];
+  /** Chemical-safety and buffer-specific cautions for the sheet. */
   cautions: string[];
+  /** Where the calculation went beyond its data (extrapolation, high ionic strength). */
   warnings: string[];
 }
