@@ -4,7 +4,7 @@
 // 2 for bad arguments, 1 for a file that cannot be read or is not a datasets file.
 import { readFile } from 'node:fs/promises';
 import { performance } from 'node:perf_hooks';
-import { chooseModel, ENGINE_VERSION, fitProfile, type ModelId, type ProfileFit } from '@shared/fitting';
+import { ENGINE_VERSION, fitProfile, type ModelId, type ProfileFit } from '@shared/fitting';
 
 const MODELS = ['bell', 'acid', 'base', 'bell-plateau', 'auto'] as const;
 type CliModel = (typeof MODELS)[number];
@@ -132,14 +132,13 @@ function failedResult(
 
 function fitOne(d: Dataset, args: Args): Record<string, unknown> {
   const n = Array.isArray(d.pH) ? d.pH.length : 0;
-  const options = { profile: false, alternative: false, bootstrap: args.bootstrap };
-  if (args.model === 'auto') {
-    const choice = chooseModel(d, options);
-    return choice.ok
-      ? resultOf(d.id, choice.value.fit, args.bootstrap)
-      : failedResult(d.id, args.model, n, choice.error.code, choice.error.message);
-  }
-  const fit = fitProfile(d, { ...options, model: args.model });
+  // only what the results format holds is computed: no profile likelihood, no alternative fit
+  const fit = fitProfile(d, {
+    model: args.model,
+    profile: false,
+    alternative: false,
+    bootstrap: args.bootstrap,
+  });
   return fit.ok
     ? resultOf(d.id, fit.value, args.bootstrap)
     : failedResult(d.id, args.model, n, fit.error.code, fit.error.message);

@@ -10,29 +10,9 @@ import { MODELS, type ModelId } from './models';
 import { prepareProfile, type ProfileInput } from './ph-data';
 import { fail, finiteOrNull, ok, type Result } from './result';
 import { fUpperTail } from './stats/distributions';
-import type { ProfileFit } from './types';
+import type { CandidateSummary, NestedTest, ProfileFit } from './types';
 
-export interface CandidateSummary {
-  model: ModelId;
-  nFitted: number;
-  ssr: number | null;
-  aicc: number | null;
-  deltaAicc: number | null;
-  /** Akaike weight exp(−ΔAICc/2) normalised over the usable candidates */
-  weight: number | null;
-  converged: boolean;
-  /** false when a pKa ran out of the data (the fit is then a simpler model in disguise) */
-  usable: boolean;
-}
-
-export interface NestedTest {
-  simpler: ModelId;
-  complex: ModelId;
-  F: number | null;
-  df1: number;
-  df2: number;
-  pValue: number | null;
-}
+export type { CandidateSummary, NestedTest } from './types';
 
 export interface ModelChoice {
   proposed: ModelId;
@@ -156,5 +136,7 @@ export function chooseModel(
     alternative: options.alternative ?? true,
     maxIterations: options.maxIterations ?? 200,
   });
-  return ok({ proposed: current.model, reason, candidates: summaries, tests, fit: full ?? current });
+  const fit = full ?? current;
+  fit.selection = { proposed: current.model, reason, candidates: summaries, tests };
+  return ok({ proposed: current.model, reason, candidates: summaries, tests, fit });
 }

@@ -227,6 +227,7 @@ export function describeFit(
     runs,
     flags,
     alternative: null,
+    selection: null,
     bootstrap: null,
   };
   if (options.profile) attachProfiles(fit, ctx, deltaGap ?? null);

@@ -8,8 +8,8 @@ import { fail, ok, type Result } from './result';
 import type { ProfileFit } from './types';
 
 export interface FitOptions {
-  /** default 'bell' */
-  model?: ModelId;
+  /** default 'bell'; 'auto' proposes the simplest adequate model (see chooseModel) */
+  model?: ModelId | 'auto';
   /** profile-likelihood intervals for every fitted parameter and Δ (default true) */
   profile?: boolean;
   /** residual-bootstrap resamples for the optimum and the window (default 0 = none) */
@@ -35,9 +35,10 @@ function simplerModel(model: ModelId, notDetermined: readonly string[]): ModelId
   return null;
 }
 
-export function checkOptions(options: FitOptions): Result<Required<FitOptions>> {
+export function checkOptions(options: FitOptions): Result<Required<FitOptions> & { model: ModelId }> {
+  options = options ?? {}; // a null from a careless caller means the defaults
   const model = options.model ?? 'bell';
-  if (!MODEL_IDS.includes(model)) {
+  if (model === 'auto' || !MODEL_IDS.includes(model)) {
     return fail(
       'unknown_model',
       `Unknown model '${String(model)}'; expected one of ${MODEL_IDS.join(', ')}.`,
@@ -67,7 +68,10 @@ export function checkOptions(options: FitOptions): Result<Required<FitOptions>> 
 }
 
 /** Fits prepared data (used by fitProfile, chooseModel and the global fit's separate fits). */
-export function fitPrepared(data: PhData, opts: Required<FitOptions>): ProfileFit | null {
+export function fitPrepared(
+  data: PhData,
+  opts: Required<FitOptions> & { model: ModelId },
+): ProfileFit | null {
   const model = MODELS[opts.model];
   const core = fitModel(model, data, { maxIterations: opts.maxIterations });
   if (!core) return null;

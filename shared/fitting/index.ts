@@ -4,7 +4,7 @@
  * null). Bad input never throws: each entry point returns
  * `{ ok: true, value } | { ok: false, error: { code, message } }`.
  *
- *   fitProfile({ pH, v, w? }, { model?, profile?, bootstrap?, seed?, alternative? })
+ *   fitProfile({ pH, v, w? }, { model?: 'bell' | … | 'auto', profile?, bootstrap?, seed?, alternative? })
  *       → ProfileFit: parameters (value, se, ci95, profile95, boot95, status), pHopt, peak, Δ,
  *         half-activity window, covariance, correlation, residuals, runs test, flags, and the
  *         simpler model offered when a pKa is not determined (`alternative`).
@@ -26,7 +26,7 @@ import { fitCurve as fitCurveRaw } from './fit-curve';
 import { fitProfile as fitProfileRaw } from './fit-profile';
 import { fitGlobal as fitGlobalRaw } from './global';
 import { curveWithBand as curveWithBandRaw, evaluateModel as evaluateModelRaw } from './curve';
-import { guarded } from './result';
+import { guarded, ok } from './result';
 
 export { ENGINE_VERSION } from './version';
 export { MODEL_IDS } from './models';
@@ -35,7 +35,7 @@ export type { Result, FitError, FitErrorCode } from './result';
 export type * from './types';
 export type { FitOptions } from './fit-profile';
 export type { ProfileInput } from './ph-data';
-export type { ModelChoice, CandidateSummary, NestedTest } from './choose-model';
+export type { ModelChoice } from './choose-model';
 export type { GlobalFit, GlobalDataset, GlobalInput } from './global';
 export type { CurveBand } from './curve';
 export type { CurveFit, CurveData, CurveFitOptions, StartReport } from './fit-curve';
@@ -44,8 +44,14 @@ export { studentTQuantile, studentTCdf, fUpperTail } from './stats/distributions
 export { runsTest } from './stats/runs-test';
 export { mulberry32 } from './prng';
 
-export const fitProfile: typeof fitProfileRaw = (input, options) =>
-  guarded(() => fitProfileRaw(input, options));
+export const fitProfile: typeof fitProfileRaw = (input, options = {}) =>
+  guarded(() => {
+    if (options?.model !== 'auto') return fitProfileRaw(input, options);
+    // 'auto': the proposed model's fit, with how it was chosen in `selection`
+    const { model: _auto, ...rest } = options;
+    const choice = chooseModelRaw(input, rest);
+    return choice.ok ? ok(choice.value.fit) : choice;
+  });
 export const chooseModel: typeof chooseModelRaw = (input, options) =>
   guarded(() => chooseModelRaw(input, options));
 export const fitGlobal: typeof fitGlobalRaw = (inputs, options) =>

@@ -92,5 +92,36 @@ export interface ProfileFit {
   flags: Flag[];
   /** the simpler model offered when a pKa is not determined (e.g. the one-limb fit) */
   alternative: ProfileFit | null;
+  /** with model 'auto': how this model was chosen */
+  selection: ModelSelection | null;
   bootstrap: BootstrapSummary | null;
+}
+
+export interface CandidateSummary {
+  model: ModelId;
+  nFitted: number;
+  ssr: number | null;
+  aicc: number | null;
+  deltaAicc: number | null;
+  /** Akaike weight exp(−ΔAICc/2) normalised over the usable candidates */
+  weight: number | null;
+  converged: boolean;
+  /** false when a pKa ran out of the data (the fit is then a simpler model in disguise) */
+  usable: boolean;
+}
+
+export interface NestedTest {
+  simpler: ModelId;
+  complex: ModelId;
+  F: number | null;
+  df1: number;
+  df2: number;
+  pValue: number | null;
+}
+
+export interface ModelSelection {
+  proposed: ModelId;
+  reason: string;
+  candidates: CandidateSummary[];
+  tests: NestedTest[];
 }

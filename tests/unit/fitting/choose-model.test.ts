@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chooseModel, type ModelId } from '@shared/fitting';
+import { chooseModel, fitProfile, type ModelId } from '@shared/fitting';
 import { grid, simulate } from './helpers/simulate';
 
 // Invented profiles, 25 points from pH 2 to 12 with Gaussian noise (helpers/simulate).
@@ -34,5 +34,25 @@ describe('model choice: the simplest adequate model', () => {
     if (!r.ok) throw new Error(r.error.message);
     expect(r.value.proposed).toBe('acid');
     expect(r.value.candidates.find((c) => c.model === 'bell')?.usable).toBe(false);
+  });
+});
+
+describe("fitProfile with model 'auto'", () => {
+  it('returns the proposed model’s fit and how it was chosen', () => {
+    const r = fitProfile(simulate('acid', [50, 6], grid(2, 12, 25), 1, 3), { model: 'auto', profile: false });
+    if (!r.ok) throw new Error(r.error.message);
+    expect(r.value.model).toBe('acid');
+    expect(r.value.selection?.proposed).toBe('acid');
+    expect(r.value.selection?.candidates.map((c) => c.model)).toEqual([
+      'acid',
+      'base',
+      'bell',
+      'bell-plateau',
+      'three',
+    ]);
+  });
+  it('is null for a fit of a named model', () => {
+    const r = fitProfile(simulate('acid', [50, 6], grid(2, 12, 25), 1, 3), { model: 'acid', profile: false });
+    expect(r.ok && r.value.selection).toBeNull();
   });
 });
