@@ -5,7 +5,7 @@
 // GENERATED DATA: the workbook is invented here (seeded), not a measurement.
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import ExcelJS from 'exceljs';
@@ -36,28 +36,48 @@ async function makeWorkbook(): Promise<Buffer> {
   return Buffer.from(await workbook.xlsx.writeBuffer());
 }
 
-type Mode = 'none' | 'exceljs' | 'parse';
+type Mode = 'none' | 'exceljs' | 'parse' | 'paired';
 
+async function loadWithExceljs(bytes: Buffer): Promise<void> {
+  await new ExcelJS.Workbook().xlsx.load(bytes as unknown as Parameters<ExcelJS.Xlsx['load']>[0]);
+}
+
+async function parseWithBellwether(bytes: Buffer): Promise<void> {
+  const result = await parseReaderFile(bytes, 'bench.xlsx');
+  if (
+    !result.ok ||
+    result.value.blocks[0].kind !== 'kinetic' ||
+    result.value.blocks[0].times_s.length !== READS
+  ) {
+    throw new Error(`parse did not find the ${READS}-read table`);
+  }
+}
+
+/** Each timed run starts from a collected heap, so no run pays for the garbage of the one before. */
+async function timed(run: () => Promise<void>): Promise<number> {
+  (globalThis as { gc?: () => void }).gc?.();
+  const start = performance.now();
+  await run();
+  return performance.now() - start;
+}
+
+/** 'paired' runs the two in turn in one process, so both see the same machine load (the fair ratio). */
 async function child(mode: Mode, file: string, runs: number): Promise<void> {
   const bytes = readFileSync(file);
   const times: number[] = [];
+  const ratios: number[] = [];
   for (let i = 0; i < runs; i++) {
-    const start = performance.now();
-    if (mode === 'exceljs')
-      await new ExcelJS.Workbook().xlsx.load(bytes as unknown as Parameters<ExcelJS.Xlsx['load']>[0]);
-    if (mode === 'parse') {
-      const result = await parseReaderFile(bytes, 'bench.xlsx');
-      if (
-        !result.ok ||
-        result.value.blocks[0].kind !== 'kinetic' ||
-        result.value.blocks[0].times_s.length !== READS
-      ) {
-        throw new Error(`parse did not find the ${READS}-read table`);
-      }
+    if (mode === 'exceljs') times.push(await timed(() => loadWithExceljs(bytes)));
+    if (mode === 'parse') times.push(await timed(() => parseWithBellwether(bytes)));
+    if (mode === 'paired') {
+      // Alternate which goes first, so neither always runs on the warmer (or the more loaded) side.
+      const exceljsFirst = i % 2 === 0;
+      const first = await timed(() => (exceljsFirst ? loadWithExceljs(bytes) : parseWithBellwether(bytes)));
+      const second = await timed(() => (exceljsFirst ? parseWithBellwether(bytes) : loadWithExceljs(bytes)));
+      if (i > 0) ratios.push(exceljsFirst ? second / first : first / second); // pair 0 pays for compiling both
     }
-    times.push(performance.now() - start);
   }
-  process.stdout.write(JSON.stringify({ times, maxRssMb: process.resourceUsage().maxRSS / 1024 }));
+  process.stdout.write(JSON.stringify({ times, ratios, maxRssMb: process.resourceUsage().maxRSS / 1024 }));
 }
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
@@ -71,23 +91,25 @@ async function main(): Promise<void> {
     const self = fileURLToPath(import.meta.url);
     const measure = (mode: Mode) =>
       JSON.parse(
-        execFileSync(process.execPath, ['--import', 'tsx', self, '--child', mode, file, String(runs)], {
-          encoding: 'utf8',
-        }),
-      ) as {
-        times: number[];
-        maxRssMb: number;
-      };
+        execFileSync(
+          process.execPath,
+          ['--expose-gc', '--import', 'tsx', self, '--child', mode, file, String(runs)],
+          {
+            encoding: 'utf8',
+          },
+        ),
+      ) as { times: number[]; ratios: number[]; maxRssMb: number };
     const base = measure('none');
     const exceljs = measure('exceljs');
     const parse = measure('parse');
+    const paired = measure('paired');
     const size = readFileSync(file).length;
     const lines = [
-      `workbook: 384 wells x ${READS} reads (+ time, temperature), ${(size / 1024).toFixed(0)} KiB, ${runs} runs each (first run included)`,
-      `exceljs load alone   median ${median(exceljs.times).toFixed(0)} ms  (first ${exceljs.times[0].toFixed(0)} ms)  peak RSS ${exceljs.maxRssMb.toFixed(0)} MB`,
-      `parseReaderFile      median ${median(parse.times).toFixed(0)} ms  (first ${parse.times[0].toFixed(0)} ms)  peak RSS ${parse.maxRssMb.toFixed(0)} MB`,
-      `ratio parse / exceljs (medians) ${(median(parse.times) / median(exceljs.times)).toFixed(2)}`,
-      `process baseline (tsx, modules loaded, no work) peak RSS ${base.maxRssMb.toFixed(0)} MB`,
+      `workbook: 384 wells x ${READS} reads (+ time, temperature), ${(size / 1024).toFixed(0)} KiB, ${runs} runs each`,
+      `exceljs load alone   median ${median(exceljs.times).toFixed(0)} ms  (first run ${exceljs.times[0].toFixed(0)} ms)  peak RSS ${exceljs.maxRssMb.toFixed(0)} MB`,
+      `parseReaderFile      median ${median(parse.times).toFixed(0)} ms  (first run ${parse.times[0].toFixed(0)} ms)  peak RSS ${parse.maxRssMb.toFixed(0)} MB`,
+      `parse / exceljs, paired runs in one process: median ${median(paired.ratios).toFixed(2)} (min ${Math.min(...paired.ratios).toFixed(2)}, max ${Math.max(...paired.ratios).toFixed(2)})`,
+      `process baseline (tsx and modules loaded, no work) peak RSS ${base.maxRssMb.toFixed(0)} MB; machine load average ${loadavg()[0].toFixed(1)} on ${cpus().length} CPUs`,
     ];
     process.stdout.write(`${lines.join('\n')}\n`);
   } finally {

@@ -116,7 +116,7 @@ function checkNotCutShort(grid: Grid, region: Region): void {
 
 /** A 'Well' header that no table took: most likely its value column has a name Bellwether does not know. */
 function noteLoneWellColumns({ grid, claimed, notes }: DetectContext): void {
-  grid.forEach((cell, row, column) => {
+  grid.forEachText((cell, row, column) => {
     if (cell.t !== 's' || !WELL_HEADER.test(cell.v.trim()) || claimed.some((r) => inRegion(r, row, column)))
       return;
     const ref = cellRef(row, column);

@@ -52,6 +52,7 @@ export function kineticWells(
     const name = wellName(position);
     const missing: PointFlag[] = [];
     wells[name] = cells.map((cell, index) => {
+      if (cell?.t === 'n' && Number.isFinite(cell.v)) return cell.v; // the common case, without an allocation
       const measure = readMeasure(cell);
       if (measure.value !== null) return measure.value;
       missing.push({ index, flag: measure.flag, raw: measure.raw });

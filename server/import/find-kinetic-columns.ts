@@ -17,7 +17,7 @@ interface HeaderColumns {
 export function findKineticColumns(context: DetectContext): Draft[] {
   const { grid, claimed } = context;
   const drafts: Draft[] = [];
-  grid.forEach((cell, headerRow, timeColumn) => {
+  grid.forEachText((cell, headerRow, timeColumn) => {
     if (
       cell.t !== 's' ||
       !isTimeHeader(cell.v.trim()) ||

@@ -16,7 +16,7 @@ const MAX_SKIPPED_HEADER_COLUMNS = 6;
 export function findKineticRows(context: DetectContext): Draft[] {
   const { grid, claimed } = context;
   const drafts: Draft[] = [];
-  grid.forEach((cell, row, column) => {
+  grid.forEachText((cell, row, column) => {
     if (
       cell.t !== 's' ||
       row === 0 ||

@@ -14,7 +14,7 @@ import { formatHolding, looksLikeWellName, parseWellName, plateWells, wellName }
 export function findLongTables(context: DetectContext): Draft[] {
   const { grid, claimed } = context;
   const drafts: Draft[] = [];
-  grid.forEach((cell, headerRow, wellColumn) => {
+  grid.forEachText((cell, headerRow, wellColumn) => {
     if (cell.t !== 's' || !WELL_HEADER.test(cell.v.trim())) return;
     const header = (grid.rows[headerRow] ?? []).map((c) => (c?.t === 's' ? c.v.trim() : ''));
     const valueColumns = header.flatMap((text, c) =>

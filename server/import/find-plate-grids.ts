@@ -8,7 +8,7 @@ import { PLATE_SHAPE, ROW_LETTERS, plateWells } from './wells';
 
 export function findPlateGrids({ grid, claimed, notes }: DetectContext): Draft[] {
   const drafts: Draft[] = [];
-  grid.forEach((cell, row, column) => {
+  grid.forEachText((cell, row, column) => {
     if (cell.t !== 's' || cell.v.trim().toUpperCase() !== 'A' || row === 0) return;
     const letters = countLetters(grid, row, column);
     const numbers = countNumbers(grid, row - 1, column + 1);

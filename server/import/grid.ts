@@ -31,7 +31,16 @@ export class Grid {
     return this.rows.length;
   }
 
+  /** Where the text cells are, row by row: detectors start only from text (headers, letters, well names). */
+  private readonly texts: [number, number][] = [];
+  private textsInOrder = true;
+
   set(row: number, column: number, cell: Cell): void {
+    if (cell.t === 's') {
+      const last = this.texts[this.texts.length - 1];
+      if (last && (row < last[0] || (row === last[0] && column < last[1]))) this.textsInOrder = false;
+      this.texts.push([row, column]);
+    }
     let cells = this.rows[row];
     if (!cells) {
       cells = [];
@@ -54,9 +63,13 @@ export class Grid {
     return text === '' ? null : text;
   }
 
-  /** Calls fn for every non-empty cell, row by row, left to right. */
-  forEach(fn: (cell: Cell, row: number, column: number) => void): void {
-    this.rows.forEach((cells, row) => cells.forEach((cell, column) => cell && fn(cell, row, column)));
+  /** Calls fn for every text cell, row by row, left to right (numbers skipped: a sheet is mostly numbers). */
+  forEachText(fn: (cell: Cell, row: number, column: number) => void): void {
+    if (!this.textsInOrder) {
+      this.texts.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+      this.textsInOrder = true;
+    }
+    for (const [row, column] of this.texts) fn(this.rows[row][column]!, row, column);
   }
 }
 
