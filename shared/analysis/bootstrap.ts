@@ -10,7 +10,7 @@
 import { ENGINE_VERSION, fitProfile, type ProfileFit } from '../fitting';
 import { ANALYSIS_VERSION } from './analyse';
 import { fail, guarded, ok, type Result } from './result';
-import type { AnalysisInput, AnalysisResult, BootstrapOptions } from './types';
+import type { AnalysisInput, AnalysisResult, BootstrapOptions, VariantProfile } from './types';
 import { checkInput } from './validate';
 
 function staleness(result: AnalysisResult, input: AnalysisInput): string | null {
@@ -46,11 +46,10 @@ function graft(target: ProfileFit, boot: ProfileFit): void {
   target.bootstrap = boot.bootstrap;
 }
 
-function run(
-  result: AnalysisResult,
-  input: AnalysisInput,
-  options: BootstrapOptions,
-): Result<AnalysisResult> {
+function checkOptions(options: {
+  resamples?: number;
+  seed?: number;
+}): Result<{ resamples: number; seed: number }> {
   const resamples = options.resamples ?? 1000;
   const seed = options.seed ?? 1;
   if (!Number.isInteger(resamples) || resamples < 1 || resamples > 1_000_000)
@@ -59,31 +58,62 @@ function run(
       'The number of bootstrap resamples must be a whole number from 1 to 1,000,000.',
     );
   if (!Number.isInteger(seed)) return fail('invalid_setting', 'The bootstrap seed must be a whole number.');
+  return ok({ resamples, seed });
+}
+
+/** One profile's bootstrap (its fitData and model), grafted onto a copy of it. */
+function bootOne(profile: VariantProfile, resamples: number, seed: number): Result<VariantProfile> {
+  if (!profile.fit) return fail('invalid_input', `${profile.name} has no fit to bootstrap.`);
+  const boot = fitProfile(
+    { pH: profile.fitData.pH, v: profile.fitData.v },
+    { model: profile.fit.model, bootstrap: resamples, seed, profile: false, alternative: false },
+  );
+  if (!boot.ok) return fail('invalid_input', `${profile.name}: ${boot.error.message}`);
+  const out = structuredClone(profile);
+  graft(out.fit!, boot.value);
+  out.bootstrap = boot.value.bootstrap;
+  return ok(out);
+}
+
+function run(
+  result: AnalysisResult,
+  input: AnalysisInput,
+  options: BootstrapOptions,
+): Result<AnalysisResult> {
+  const checked = checkOptions(options);
+  if (!checked.ok) return checked;
+  const { resamples, seed } = checked.value;
   const stale = staleness(result, input);
   if (stale)
     return fail(
       'stale_result',
       `The analysis is out of date: ${stale}. Run the analysis again, then the bootstrap.`,
     );
-  const out = structuredClone(result);
-  const todo = out.profiles.filter((p) => p.fit);
-  const total = todo.length * resamples;
+  const total = result.profiles.filter((p) => p.fit).length * resamples;
   let done = 0;
   options.onProgress?.(0, total);
-  out.profiles.forEach((profile, i) => {
-    if (!profile.fit) return;
-    const boot = fitProfile(
-      { pH: profile.fitData.pH, v: profile.fitData.v },
-      { model: profile.fit.model, bootstrap: resamples, seed: seed + i, profile: false, alternative: false },
-    );
-    if (boot.ok) {
-      graft(profile.fit, boot.value);
-      profile.bootstrap = boot.value.bootstrap;
-    }
+  const profiles = result.profiles.map((profile, i) => {
+    if (!profile.fit) return profile;
+    const booted = bootOne(profile, resamples, seed + i);
     done += resamples;
     options.onProgress?.(done, total);
+    return booted.ok ? booted.value : profile;
   });
-  return ok(out);
+  return ok({ ...result, profiles });
+}
+
+/**
+ * Bootstrap of one profile, for a job that wants to yield or report between profiles. Use seed + i
+ * for the i-th profile to get what bootstrapProfiles gives. The profile itself is not changed.
+ */
+export function bootstrapProfile(
+  profile: VariantProfile,
+  options: { resamples?: number; seed?: number } = {},
+): Result<VariantProfile> {
+  return guarded(() => {
+    const checked = checkOptions(options);
+    return checked.ok ? bootOne(profile, checked.value.resamples, checked.value.seed) : checked;
+  });
 }
 
 /** Adds bootstrap intervals (optimum, window, parameters) to every fitted profile of `result`. */

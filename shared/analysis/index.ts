@@ -9,16 +9,19 @@
  *       map checks), units, notes, flag sentences.
  *   bootstrapProfiles(result, input, { resamples = 1000, seed = 1, onProgress }): Result<AnalysisResult>
  *       the same result with bootstrap intervals of the optimum, window and parameters per profile.
+ *   bootstrapProfile(profile, { resamples = 1000, seed = 1 }): Result<VariantProfile>
+ *       one profile's bootstrap (seed + i for the i-th profile reproduces bootstrapProfiles).
  *   resolveWindow(settings, plateId, well, variantId) — which rate window applies to a well.
  *   planUnits(input, hasStandardCurve) — the units rule (units.ts).
  *   flagText(code) · ANALYSIS_FLAG_TEXT · CV_LIMIT_PERCENT · OVERLAP_ALPHA · Z_PRIME_RULE · ANALYSIS_VERSION
  * Every entry point returns { ok: true, value } | { ok: false, error: { code, message } }.
  */
 export { analyseStudy, ANALYSIS_VERSION } from './analyse';
-export { bootstrapProfiles } from './bootstrap';
+export { bootstrapProfile, bootstrapProfiles } from './bootstrap';
 export { ANALYSIS_FLAG_TEXT, flagText, type AnalysisFlag } from './flags';
 export { OVERLAP_ALPHA } from './overlaps';
-export { CV_LIMIT_PERCENT, Z_PRIME_RULE } from './qc';
+export { CV_LIMIT_PERCENT } from './qc';
+export { Z_PRIME_RULE } from './z-prime';
 export type { AnalysisError, AnalysisErrorCode, Result } from './result';
 export { resolveWindow } from './signals';
 export { planUnits, type UnitPlan } from './units';

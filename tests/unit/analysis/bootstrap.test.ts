@@ -1,6 +1,11 @@
 // Bootstrap intervals for every profile of a GENERATED study (make-study.ts, invented data), with progress.
 import { describe, expect, it } from 'vitest';
-import { analyseStudy, bootstrapProfiles, type AnalysisResult } from '../../../shared/analysis';
+import {
+  analyseStudy,
+  bootstrapProfile,
+  bootstrapProfiles,
+  type AnalysisResult,
+} from '../../../shared/analysis';
 import { DEFAULT_VARIANTS, makeStudy } from '../../fixtures/analysis/make-study';
 import { nonFinite } from './helpers';
 
@@ -57,5 +62,15 @@ describe('bootstrapProfiles', () => {
       expect(stale.error).toMatchObject({ code: 'stale_result', message: expect.stringMatching(/excluded/) });
     const bad = bootstrapProfiles(result, study.input, { resamples: 0 });
     expect(!bad.ok && bad.error.code).toBe('invalid_setting');
+  });
+
+  it('bootstrapProfile does one profile; seed + i reproduces bootstrapProfiles', () => {
+    const one = bootstrapProfile(result.profiles[2], { resamples: 200, seed: 3 + 2 });
+    if (!one.ok) throw new Error(one.error.message);
+    expect(one.value.fit!.window.width.boot95).toEqual(out.profiles[2].fit!.window.width.boot95);
+    expect(one.value.bootstrap).toEqual(out.profiles[2].bootstrap);
+    expect(result.profiles[2].bootstrap).toBeNull();
+    const unfitted = bootstrapProfile({ ...result.profiles[0], fit: null });
+    expect(!unfitted.ok && unfitted.error.message).toMatch(/no fit/);
   });
 });
