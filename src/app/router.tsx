@@ -45,6 +45,43 @@ export const router = createBrowserRouter([
           { path: rel(paths.account.path), lazy: load(() => import('./routes/account')) },
           { path: rel(paths.teams.path), lazy: load(() => import('./routes/teams')) },
           { path: rel(paths.team.path), lazy: load(() => import('./routes/teams')) },
+          // Records (issue 4): everyone signed in reads them; the screens hide what a role cannot do.
+          { path: rel(paths.studies.path), lazy: load(() => import('./routes/studies/list')) },
+          {
+            path: rel(paths.study.path),
+            lazy: load(() => import('./routes/studies/study-layout')),
+            children: [
+              { index: true, lazy: load(() => import('./routes/studies/overview')) },
+              { path: 'buffers', lazy: load(() => import('./routes/studies/buffers')) },
+            ],
+          },
+          { path: rel(paths.enzymes.path), lazy: load(() => import('./routes/enzymes/list')) },
+          { path: rel(paths.enzyme.path), lazy: load(() => import('./routes/enzymes/detail')) },
+          { path: rel(paths.assays.path), lazy: load(() => import('./routes/assays/list')) },
+          { path: rel(paths.assay.path), lazy: load(() => import('./routes/assays/detail')) },
+          { path: rel(paths.buffers.path), lazy: load(() => import('./routes/buffers/list')) },
+          { path: rel(paths.buffer.path), lazy: load(() => import('./routes/buffers/detail')) },
+          { path: rel(paths.bufferSeriesList.path), lazy: load(() => import('./routes/buffer-series/list')) },
+          {
+            path: rel(paths.bufferSeriesNew.path),
+            lazy: load(() => import('./routes/buffer-series/designer')),
+          },
+          { path: rel(paths.bufferSeries.path), lazy: load(() => import('./routes/buffer-series/designer')) },
+        ],
+      },
+      {
+        element: <RequireAuth permission="records:write" />,
+        children: [
+          { path: rel(paths.studyNew.path), lazy: load(() => import('./routes/studies/new')) },
+          { path: rel(paths.assayNew.path), lazy: load(() => import('./routes/assays/edit')) },
+          { path: rel(paths.assayEdit.path), lazy: load(() => import('./routes/assays/edit')) },
+        ],
+      },
+      {
+        element: <RequireAuth permission="buffers:manage" />,
+        children: [
+          { path: rel(paths.bufferNew.path), lazy: load(() => import('./routes/buffers/edit')) },
+          { path: rel(paths.bufferEdit.path), lazy: load(() => import('./routes/buffers/edit')) },
         ],
       },
       {

@@ -36,3 +36,9 @@ export function formatGrouped(value: number | null | undefined, missing = '—')
   if (value === null || value === undefined || !Number.isFinite(value)) return missing;
   return withMinus(value.toLocaleString('en-GB', { maximumFractionDigits: 6 }).replace(/,/g, ' '));
 }
+
+/** A value as it was given (library data keep their published digits), with a true minus sign. */
+export function formatPlain(value: number | null | undefined, missing = '—'): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return missing;
+  return withMinus(String(value));
+}

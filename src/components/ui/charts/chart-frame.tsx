@@ -7,7 +7,7 @@ import { Group } from '@visx/group';
 import { scaleLinear } from '@visx/scale';
 import { useId, useRef, useState, type ReactNode } from 'react';
 import { Button } from '../button';
-import { ChartLegend, type ChartLegendItem } from './chart-legend';
+import { ChartLegend, LEGEND_ROW_HEIGHT, legendRows, type ChartLegendItem } from './chart-legend';
 import { chartTheme } from './chart-theme';
 import { chartFileName, downloadPng, downloadSvg } from './export-chart';
 import { useElementWidth } from './use-element-width';
@@ -27,7 +27,7 @@ export type ChartFrameProps = {
   yDomain: [number, number];
   /** Round the domains out to tick values (default true). */
   nice?: boolean;
-  /** Height of the whole SVG in px (default 300); the width follows the container. */
+  /** Height of the plot area and axes in px (default 300; a legend adds its rows); the width follows the container. */
   height?: number;
   xTickFormat?: (value: number) => string;
   yTickFormat?: (value: number) => string;
@@ -52,6 +52,8 @@ export function ChartFrame(props: ChartFrameProps) {
   const [exportError, setExportError] = useState<string | null>(null);
   const innerWidth = Math.max(60, width - margin.left - margin.right);
   const innerHeight = Math.max(60, height - margin.top - margin.bottom);
+  const rows = legend && legend.length > 0 ? legendRows(legend, width - margin.left - 8) : [];
+  const svgHeight = height + (rows.length ? rows.length * LEGEND_ROW_HEIGHT + 16 : 0);
   const x = scaleLinear<number>({ domain: props.xDomain, range: [0, innerWidth], nice });
   const y = scaleLinear<number>({ domain: props.yDomain, range: [innerHeight, 0], nice });
   const fileName = props.fileName ?? chartFileName(title);
@@ -73,7 +75,7 @@ export function ChartFrame(props: ChartFrameProps) {
         </Button>
       </div>
       <div ref={box} className="w-full">
-        <svg ref={svg} width={width} height={height} role="img" aria-label={title} fontFamily="inherit">
+        <svg ref={svg} width={width} height={svgHeight} role="img" aria-label={title} fontFamily="inherit">
           <text x={margin.left} y={16} fontSize={13} fontWeight={600} fill={chartTheme.ink}>
             {title}
           </text>
@@ -111,8 +113,8 @@ export function ChartFrame(props: ChartFrameProps) {
               labelOffset={14}
               labelProps={{ fill: chartTheme.ink, fontSize: chartTheme.titleSize, textAnchor: 'middle' }}
             />
-            {legend && legend.length > 0 && <ChartLegend items={legend} x={innerWidth - 4} y={4} />}
           </Group>
+          {rows.length > 0 && <ChartLegend rows={rows} x={margin.left} y={height + 12} />}
         </svg>
       </div>
       {caption && <figcaption className="mt-1 text-sm text-ink-muted">{caption}</figcaption>}

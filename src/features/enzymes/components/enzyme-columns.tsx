@@ -20,7 +20,7 @@ export const enzymeColumns = [
   column.accessor('variantCount', { header: 'Variants', meta: { numeric: true } }),
   column.accessor('updatedAt', {
     header: 'Updated',
-    meta: { numeric: true },
+    meta: { numeric: true, className: 'whitespace-nowrap' },
     cell: (c) => formatDate(c.getValue()),
   }),
 ];

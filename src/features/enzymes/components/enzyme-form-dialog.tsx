@@ -22,7 +22,7 @@ export type EnzymeFormDialogProps = {
   onClose: () => void;
   teams: TeamRef[];
   /** Editing this enzyme; omit to create one. */
-  enzyme?: Enzyme;
+  enzyme?: Enzyme & { teamName?: string };
   onSaved?: (enzyme: Enzyme) => void;
 };
 
@@ -87,7 +87,7 @@ export function EnzymeFormDialog({ open, onClose, teams, enzyme, onSaved }: Enzy
         {enzyme ? (
           <p>
             <span className="font-semibold">Team:</span>{' '}
-            {teams.find((t) => t.id === enzyme.teamId)?.name ?? '—'}{' '}
+            {enzyme.teamName ?? teams.find((t) => t.id === enzyme.teamId)?.name ?? '—'}{' '}
             <span className="text-ink-muted">(an enzyme stays in its team)</span>
           </p>
         ) : (

@@ -1,6 +1,6 @@
 import type { Preparation } from '@shared/schemas/records-types';
 import { Button } from '@/components/ui/button';
-import { formatSig } from '@/components/ui/numbers';
+import { formatFixed } from '@/components/ui/numbers';
 
 export type PreparationsTableProps = {
   variantName: string;
@@ -46,7 +46,7 @@ export function PreparationsTable({ variantName, preparations, onEdit, onDelete 
         {preparations.map((p) => (
           <tr key={p.id} className="border-b border-line last:border-b-0">
             <td className="px-3 py-1 font-mono text-sm">{p.lot}</td>
-            <td className="num px-3 py-1">{formatSig(p.proteinMgPerMl, 3)}</td>
+            <td className="num px-3 py-1">{formatFixed(p.proteinMgPerMl, 2)}</td>
             <td className="num px-3 py-1">{p.preparedOn}</td>
             <td className="px-3 py-1">{p.storageBuffer || '—'}</td>
             <td className="px-3 py-1 text-ink-muted">{p.notes || '—'}</td>
