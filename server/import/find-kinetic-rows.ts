@@ -40,7 +40,6 @@ function readTable(
   wellColumn: number,
 ): { region: Region; content: Draft['content'] } | null {
   const { grid, notes } = context;
-  const wells = readWellRun(grid, firstRow, wellColumn);
   // A temperature row may sit between the time header and the first well.
   const hasTemperatureRow =
     TEMPERATURE_HEADER.test(grid.text(firstRow - 1, wellColumn) ?? '') && firstRow >= 2;
@@ -55,6 +54,8 @@ function readTable(
   const axisNotes: ParseNote[] = [];
   const axis = timeAxisOrNull(times.cells, grid.name, headerRef, axisNotes, corner === '');
   if (!axis) return null;
+  // Only now, with a time header found, is the column of wells a table whose defects are errors.
+  const wells = readWellRun(grid, firstRow, wellColumn);
   const columnOf = (k: number) => times.columns[axis.order[k]];
   const series = wells.map(({ row, position }) => ({
     position,
@@ -140,7 +141,15 @@ function readWellRun(
       break;
     }
     const name = wellName(position);
-    if (seen.has(name)) break; // a second table (another read) starts right below: it is found on its own
+    const earlier = seen.get(name);
+    if (earlier !== undefined) {
+      const ref = cellRef(row, column);
+      throw new ImportError(
+        'duplicate_well',
+        `${where(grid.name, ref)}well ${name} has a second row (the first is row ${earlier + 1}); each well needs one row. If a second read follows, give it its own header row of times.`,
+        { sheet: grid.name, cell: ref },
+      );
+    }
     seen.set(name, row);
     wells.push({ row, position });
   }

@@ -240,6 +240,20 @@ describe('tables with a defect, named by sheet and cell', () => {
     expect(error.message).toMatch(/well A1 appears a second time \(first on row 2\)/);
   });
 
+  it('refuses a well listed twice down a table of reads across', async () => {
+    const error = await refused(csv('Well,0 s,30 s\nA1,0.1,0.2\nA2,0.3,0.4\nA1,0.5,0.6\n'), 'rows.csv');
+    expect(error).toMatchObject({ code: 'duplicate_well', cell: 'A4' });
+    expect(error.message).toMatch(/well A1 has a second row \(the first is row 2\)/);
+  });
+
+  it('does not mistake a list of sample names for wells when no times head it', async () => {
+    const result = await parseReaderFile(
+      csv('Sample,Buffer\nA1,citrate\nQ5,acetate\nA1,MES\n'),
+      'samples.csv',
+    );
+    expect(result.ok || result.error.code).toBe('nothing_found');
+  });
+
   it('refuses a well name outside A1..P24', async () => {
     const error = await refused(csv('Well,Value\nA1,0.1\nA25,0.2\n'), 'long.csv');
     expect(error).toMatchObject({ code: 'invalid_well', cell: 'A3' });
