@@ -82,8 +82,9 @@ export function convertRow(
 ): void {
   if (row.role !== 'sample' || row.corrected === null) return;
   if (plan.conversion === null) {
-    row.activity = row.corrected;
-    row.activitySe = row.correctedSe;
+    // no way to product: every column stays in signal units (units.rate = units.activity = units.signal)
+    row.rate = row.activity = row.corrected;
+    row.rateSe = row.activitySe = row.correctedSe;
     return;
   }
   const product =

@@ -72,7 +72,7 @@ export interface WellRow extends WellRef {
   /** signal − blank mean, in units.signal; SE √(SE_signal² + SE_blank²) for rates, null for end points. */
   corrected: number | null;
   correctedSe: number | null;
-  /** Product formed per minute (or product formed), in units.rate. */
+  /** Product formed per minute (or product formed), in units.rate (the corrected signal when there is no conversion). */
   rate: number | null;
   rateSe: number | null;
   /** In units.activity; what the profiles are made of. */

@@ -62,6 +62,25 @@ describe('an end-point study with a standard curve (generated, fluorescence)', (
   });
 });
 
+describe('a kinetic study with a standard curve (generated, fluorescence)', () => {
+  it('divides the rate of signal change by the curve’s slope and finds the true rates', () => {
+    const study = makeStudy({
+      seed: 31,
+      quantitation: 'standard-curve',
+      detection: 'fluorescence',
+      readNoise: 2,
+    });
+    const result = run(study.input);
+    expect(result.units).toMatchObject({ signal: 'RFU/min', rate: 'µM/min', activityKind: 'specific' });
+    const curve = result.standardCurves.find((c) => c.scope === 'plate')!;
+    for (const w of result.wells.filter((x) => x.role === 'sample')) {
+      expect(w.rate!).toBeCloseTo(w.corrected! / curve.slope, 10); // r = slope/b (shared/plate standard-curve.ts)
+      const truth = study.truth[`${w.plateId}:${w.well}`].v0;
+      if (truth > 5 && w.n! >= 30) expect(Math.abs(w.rate! - truth) / truth).toBeLessThan(0.02);
+    }
+  });
+});
+
 describe('Beer–Lambert with an indicator product (generated kinetic study, chromophore pKa 7.15)', () => {
   // 4-nitrophenol pKa ≈ 7.15 at 25 °C [pub, STEEP ref "c"; SCIENCE.md §3.2]; only the phenolate absorbs.
   const study = makeStudy({ seed: 8, chromophorePka: 7.15, readNoise: 0.001 });
@@ -136,6 +155,38 @@ describe('hand-made end-point plates (ε = 10 000 M⁻¹cm⁻¹, l = 1 cm)', () 
     expect(row(result, 'p1', 'A1').rate!).toBeCloseTo(30, 8);
     expect(result.standardCurves[0]).toMatchObject({ scope: 'plate', n: 4 });
     expect(result.standardCurves[0].slope).toBeCloseTo(0.02, 12);
+  });
+
+  it('leaves an excluded standard out of the curve', () => {
+    // A fifth standard read wrong (invented): with it the line is off; excluded, the exact line returns.
+    const input = endpointStudy({
+      A1: { role: 'sample', variantId: 'ref', pH: 6, value: 0.7 },
+      B1: { role: 'blank', pH: 6, value: 0.1 },
+      C1: { role: 'standard', concentrationUm: 0, value: 0.1 },
+      C2: { role: 'standard', concentrationUm: 10, value: 0.3 },
+      C3: { role: 'standard', concentrationUm: 20, value: 0.5 },
+      C4: { role: 'standard', concentrationUm: 40, value: 0.9 },
+      C5: { role: 'standard', concentrationUm: 30, value: 2.0 },
+    });
+    input.assay = {
+      ...input.assay,
+      quantitation: 'standard-curve',
+      extinctionCoefficient: null,
+      pathLengthCm: null,
+    };
+    expect(row(run(input), 'p1', 'A1').rate!).not.toBeCloseTo(30, 1);
+    input.exclusions = [{ id: 's5', plateId: 'p1', well: 'C5', reason: 'Standard pipetted twice' }];
+    const result = run(input);
+    expect(row(result, 'p1', 'A1').rate!).toBeCloseTo(30, 8);
+    expect(result.standardCurves[0].wells).toEqual(['C1', 'C2', 'C3', 'C4']);
+  });
+
+  it('keeps signal units in every column when nothing converts to product (no path length)', () => {
+    const input = endpointStudy(wells);
+    input.assay = { ...input.assay, pathLengthCm: null };
+    const result = run(input);
+    expect(result.units).toMatchObject({ signal: 'A', rate: 'A', activity: 'A', activityKind: 'signal' });
+    expect(row(result, 'p1', 'A1')).toMatchObject({ corrected: 0.4, rate: 0.4, activity: 0.4 });
   });
 
   it('borrows the standards of the other plates for a plate without any, and says so', () => {
