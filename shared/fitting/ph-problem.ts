@@ -6,6 +6,7 @@
 
 import type { LsqProblem } from './lm';
 import type { PhModel } from './models';
+import { LN10, pow10 } from './models/types';
 import type { PhData } from './ph-data';
 import { scratch } from './scratch';
 
@@ -31,7 +32,40 @@ export function applyMap(map: AffineMap, u: ArrayLike<number>, theta: number[] |
   }
 }
 
+/**
+ * The bell's problem written out by hand (the command line's hot path): the same equations as
+ * models/bell.ts, without a call per point.
+ */
+function bellProblem(data: PhData): LsqProblem {
+  const { n, h, g, y, sw } = data;
+  return {
+    n,
+    p: 3,
+    evaluate(u, r, J) {
+      const V = u[0];
+      const K1 = pow10(u[1]);
+      const K2 = pow10(-u[2]);
+      for (let i = 0; i < n; i++) {
+        const a = K1 * h[i];
+        const b = K2 * g[i];
+        const inv = 1 / (1 + a + b);
+        const f = V * inv;
+        const ri = sw[i] * (y[i] - f);
+        if (!Number.isFinite(ri)) return false;
+        r[i] = ri;
+        if (!J) continue;
+        const q = sw[i] * f * LN10 * inv;
+        J[3 * i] = sw[i] * inv;
+        J[3 * i + 1] = -q * a;
+        J[3 * i + 2] = q * b;
+      }
+      return true;
+    },
+  };
+}
+
 export function phProblem(model: PhModel, data: PhData, map: AffineMap | null): LsqProblem {
+  if (model.id === 'bell' && !map) return bellProblem(data);
   const p = model.names.length;
   const q = map ? map.q : p;
   const { n, h, g, y, sw } = data;

@@ -6,6 +6,7 @@
 
 import type { PhModel } from './models';
 import type { PhData } from './ph-data';
+import { pow10 } from './models/types';
 import { scratch } from './scratch';
 
 export interface GridPoint {
@@ -93,6 +94,20 @@ export function gridStarts(
   const best: GridPoint[] = [];
   let syy = 0;
   for (let i = 0; i < data.n; i++) syy += data.w[i] * data.y[i] * data.y[i];
+  const offer = (candidate: ArrayLike<number>, ssr: number): void => {
+    if (best.length < keep || ssr < best[best.length - 1].ssr) {
+      // insertion into the short sorted list; the array copy happens only for a new best few
+      const entry = { theta: Array.from(candidate), ssr };
+      let at = best.length;
+      while (at > 0 && best[at - 1].ssr > ssr) at--;
+      best.splice(at, 0, entry);
+      if (best.length > keep) best.pop();
+    }
+  };
+  if (model.id === 'bell' && freePKa.length === 2 && freeLevel[0]) {
+    bellGrid(data, grid, syy, offer);
+    return best;
+  }
 
   const visit = (depth: number, from: number): void => {
     if (depth === freePKa.length) {
@@ -117,15 +132,7 @@ export function gridStarts(
         }
         ssr = solveLevels(data, phi, m, freeLevel, theta, work);
       }
-      if (!Number.isFinite(ssr)) return;
-      if (best.length < keep || ssr < best[best.length - 1].ssr) {
-        // insertion into the short sorted list; the array copy happens only for a new best few
-        const entry = { theta: Array.from(theta), ssr };
-        let at = best.length;
-        while (at > 0 && best[at - 1].ssr > ssr) at--;
-        best.splice(at, 0, entry);
-        if (best.length > keep) best.pop();
-      }
+      if (Number.isFinite(ssr)) offer(theta, ssr);
       return;
     }
     // pKa values in increasing order; a free pKa is also kept above any fixed one before it
@@ -136,4 +143,39 @@ export function gridStarts(
   };
   visit(0, 0);
   return best;
+}
+
+/**
+ * The bell's grid written out by hand (the command line's hot path): the powers of ten of every
+ * grid value are computed once, so a grid point costs a multiply-add and a division per point.
+ */
+function bellGrid(
+  data: PhData,
+  grid: readonly number[],
+  syy: number,
+  offer: (theta: ArrayLike<number>, ssr: number) => void,
+): void {
+  const { n, h, g, w, y } = data;
+  const up = grid.map((x) => pow10(x));
+  const down = grid.map((x) => pow10(-x));
+  const theta = [0, 0, 0];
+  for (let a = 0; a < grid.length; a++) {
+    for (let b = a + 1; b < grid.length; b++) {
+      let sxy = 0;
+      let sxx = 0;
+      for (let i = 0; i < n; i++) {
+        const phi = 1 / (1 + up[a] * h[i] + down[b] * g[i]);
+        const wf = w[i] * phi;
+        sxy += wf * y[i];
+        sxx += wf * phi;
+      }
+      if (!(sxx > 1e-300)) continue;
+      const ssr = Math.max(0, syy - (sxy * sxy) / sxx);
+      if (!Number.isFinite(ssr)) continue;
+      theta[0] = sxy / sxx;
+      theta[1] = grid[a];
+      theta[2] = grid[b];
+      offer(theta, ssr);
+    }
+  }
 }

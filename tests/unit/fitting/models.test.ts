@@ -4,6 +4,9 @@ import { bellHalfWidth, bellPeak } from '@shared/fitting/models/bell';
 import { MODELS } from '@shared/fitting/models';
 import { depressedCubicRoot } from '@shared/fitting/models/three';
 import { valueAt } from '@shared/fitting/models/types';
+import { prepareProfile } from '@shared/fitting/ph-data';
+import { phProblem } from '@shared/fitting/ph-problem';
+import { gridStarts } from '@shared/fitting/starts';
 import { curveShape } from '@shared/fitting/window';
 
 const values = (model: Parameters<typeof evaluateModel>[0], params: number[], pH: number[]): number[] => {
@@ -147,4 +150,45 @@ describe('analytic Jacobians agree with central differences', () => {
       }
     });
   }
+});
+
+describe("the bell's hand-written hot path equals the generic model path", () => {
+  // bell-200-like invented data; the generic path is reached through an identity map / a model copy
+  const pH = [3, 3.5, 4, 5, 6, 6.5, 7, 8, 9, 10];
+  const v = [1, 3, 9, 50, 90, 94, 90, 50, 9, 1];
+  const prepared = prepareProfile({ pH, v }, 3);
+  if (!prepared.ok) throw new Error(prepared.error.message);
+  const data = prepared.value;
+  it('residuals and Jacobian', () => {
+    const identity = {
+      p: 3,
+      q: 3,
+      c: new Float64Array(3),
+      M: Float64Array.from([1, 0, 0, 0, 1, 0, 0, 0, 1]),
+    };
+    const fast = phProblem(MODELS.bell, data, null);
+    const generic = phProblem(MODELS.bell, data, identity);
+    for (const theta of [
+      [1, 5, 8],
+      [0.7, 6.2, 6.4],
+      [1.3, 2, 12],
+    ]) {
+      const [r1, r2] = [new Float64Array(10), new Float64Array(10)];
+      const [J1, J2] = [new Float64Array(30), new Float64Array(30)];
+      expect(fast.evaluate(theta, r1, J1)).toBe(true);
+      expect(generic.evaluate(theta, r2, J2)).toBe(true);
+      r1.forEach((x, i) => expect(x).toBeCloseTo(r2[i], 14));
+      J1.forEach((x, i) => expect(x).toBeCloseTo(J2[i], 14));
+    }
+  });
+  it('grid starts', () => {
+    const generic = { ...MODELS.bell, id: 'bell-generic' } as unknown as typeof MODELS.bell;
+    const a = gridStarts(MODELS.bell, data, [null, null, null], 4);
+    const b = gridStarts(generic, data, [null, null, null], 4);
+    expect(a.length).toBe(4);
+    a.forEach((s, i) => {
+      expect(s.ssr).toBeCloseTo(b[i].ssr, 12);
+      s.theta.forEach((x, j) => expect(x).toBeCloseTo(b[i].theta[j], 12));
+    });
+  });
 });
