@@ -62,6 +62,21 @@ export const paths = {
     path: '/studies/:studyId/buffers',
     href: (id: string) => `/studies/${encodeURIComponent(id)}/buffers`,
   },
+  // Plates of a study (issue 5): list, map editor with the plate's reads, reader-file import.
+  studyPlates: {
+    path: '/studies/:studyId/plates',
+    href: (studyId: string) => `/studies/${encodeURIComponent(studyId)}/plates`,
+  },
+  plate: {
+    path: '/studies/:studyId/plates/:plateId',
+    href: (studyId: string, plateId: string, view?: 'reads') =>
+      `/studies/${encodeURIComponent(studyId)}/plates/${encodeURIComponent(plateId)}${view ? `?view=${view}` : ''}`,
+  },
+  plateImport: {
+    path: '/studies/:studyId/plates/:plateId/import',
+    href: (studyId: string, plateId: string) =>
+      `/studies/${encodeURIComponent(studyId)}/plates/${encodeURIComponent(plateId)}/import`,
+  },
   buffers: { path: '/buffers', href: () => '/buffers' },
   bufferNew: { path: '/buffers/new', href: () => '/buffers/new' },
   buffer: { path: '/buffers/:bufferId', href: (id: string) => `/buffers/${encodeURIComponent(id)}` },
