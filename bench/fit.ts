@@ -5,7 +5,8 @@
 //  3. one profile with 1,000 bootstrap resamples;
 //  4. ml-levenberg-marquardt on the NIST and reference checks (why Bellwether has its own solver).
 import { spawnSync } from 'node:child_process';
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { levenbergMarquardt as mlLevenbergMarquardt } from 'ml-levenberg-marquardt';
@@ -26,25 +27,53 @@ const exact = new Map(
   ]),
 );
 
+/**
+ * Runs a command; wall time from here, CPU time (user + system of the child) from bash's `times`,
+ * which stays meaningful when other work shares the machine.
+ */
 function timed(command: string, args: string[]) {
+  const quoted = [command, ...args].map((a) => `'${a.replace(/'/g, "'\\''")}'`).join(' ');
+  const script = `${quoted} > "$OUT" 2> "$ERR"; status=$?; times; exit $status`;
+  const dir = mkdtempSync(join(tmpdir(), 'bench-fit-'));
+  const env = { ...process.env, OUT: join(dir, 'out'), ERR: join(dir, 'err') };
   const t0 = process.hrtime.bigint();
-  const r = spawnSync(command, args, { cwd: root, encoding: 'utf8', maxBuffer: 256 * 1024 * 1024 });
+  const r = spawnSync('bash', ['-c', script], { cwd: root, encoding: 'utf8', env });
   const seconds = Number(process.hrtime.bigint() - t0) / 1e9;
-  if (r.status !== 0) throw new Error(`${command} ${args.join(' ')} failed: ${r.stderr}`);
-  return { seconds, stdout: r.stdout, stderr: r.stderr };
+  const stdout = readFileSync(env.OUT, 'utf8');
+  const stderr = readFileSync(env.ERR, 'utf8');
+  rmSync(dir, { recursive: true });
+  if (r.status !== 0) throw new Error(`${command} ${args.join(' ')} failed: ${stderr}`);
+  // second line of `times`: children's user and system time, e.g. "0m1.234s 0m0.210s"
+  const child = r.stdout.trim().split('\n')[1] ?? '';
+  const cpu = [...child.matchAll(/(\d+)m([\d.]+)s/g)].reduce(
+    (t, m) => t + 60 * Number(m[1]) + Number(m[2]),
+    0,
+  );
+  return { seconds, cpu, stdout, stderr };
 }
+
+line(
+  `load average at start: ${loadavg()
+    .map((x) => x.toFixed(1))
+    .join(
+      ' / ',
+    )} (1 / 5 / 15 min) on ${availableParallelism()} cores — other work on the machine slows the wall-clock figures`,
+);
 
 // 1–2. whole process and loop, through the installed entry point (bin/bellwether.js registers tsx)
 const file = join(fixtures, 'bell-5000.json');
-const startup = median(
-  Array.from({ length: REPEATS }, () => timed(process.execPath, ['bin/bellwether.js', '--help']).seconds),
+const startupRuns = Array.from({ length: REPEATS }, () =>
+  timed(process.execPath, ['bin/bellwether.js', '--help']),
 );
+const startup = median(startupRuns.map((r) => r.seconds));
+const startupCpu = median(startupRuns.map((r) => r.cpu));
 const runs = Array.from({ length: REPEATS }, () =>
   timed(process.execPath, ['bin/bellwether.js', 'fit', file, '--model', 'bell', '--timing']),
 );
 const loopRates = runs.map((r) => Number(/fits_per_s=(\d+)/.exec(r.stderr)?.[1]));
 const n = Number(/ n=(\d+)/.exec(runs[0].stderr)?.[1]);
 const whole = median(runs.map((r) => r.seconds));
+const wholeCpu = median(runs.map((r) => r.cpu));
 const viaNpm = timed('npm', ['run', '--silent', 'bellwether', '--', 'fit', file, '--timing']).seconds;
 
 const results = JSON.parse(runs[0].stdout).results as (Ref & { converged: boolean })[];
@@ -58,7 +87,9 @@ for (const r of results) {
   if (worst <= 1e-6) agree++;
 }
 
-line(`bell model, bell-5000.json (${n} profiles), median of ${REPEATS} runs`);
+line(
+  `bell model, bell-5000.json (${n} profiles), median of ${REPEATS} runs of bin/bellwether.js fit --timing`,
+);
 line(`  fitting loop:   ${median(loopRates)} fits/s        (scipy ≈ 1,280; R ≈ 510)`);
 line(`  whole process:  ${Math.round(n / whole)} fits/s  (${whole.toFixed(2)} s; scipy ≈ 1,100; R ≈ 405)`);
 line(
@@ -68,6 +99,9 @@ line(
   `  tsx start-up alone (bin/bellwether.js --help): ${startup.toFixed(2)} s; via npm run: ${viaNpm.toFixed(2)} s for the whole fit`,
 );
 line(`  whole process without the start-up: ${Math.round(n / (whole - startup))} fits/s`);
+line(
+  `  CPU time of the whole process: ${wholeCpu.toFixed(2)} s → ${Math.round(n / wholeCpu)} fits per CPU-second; start-up alone ${startupCpu.toFixed(2)} s CPU; fitting ${Math.round(n / (wholeCpu - startupCpu))} fits per CPU-second`,
+);
 line(
   `  agreement with bell-5000.exact.json: ${agree}/${exact.size} within 1e-6 (${((100 * agree) / exact.size).toFixed(2)} %)`,
 );

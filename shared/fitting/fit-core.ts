@@ -4,7 +4,7 @@
 import { levenbergMarquardt, type LmOptions, type LmResult, type StopReason } from './lm';
 import type { PhModel } from './models';
 import type { PhData } from './ph-data';
-import { applyMap, FAR, phProblem, type AffineMap } from './ph-problem';
+import { applyMap, FAR, modelJacobian, phProblem, type AffineMap } from './ph-problem';
 import { gridStarts } from './starts';
 
 /** A pKa more than this beyond the measured pH range is not determined by the data. */
@@ -177,6 +177,7 @@ export function fitModel(model: PhModel, data: PhData, options: LmOptions = {}):
   const p = model.names.length;
   const spec: FitSpec = { fixed: new Array<number | null>(p).fill(null), ordered: false };
   const status: CoreFit['status'] = new Array(p).fill('free');
+  let wrongSide = false;
   let run = fitSpec(model, data, spec, options);
   if (!run) return null;
   let starts = run.starts;
@@ -209,6 +210,7 @@ export function fitModel(model: PhModel, data: PhData, options: LmOptions = {}):
         changed = true;
       } else {
         status[j] = 'undetermined';
+        wrongSide = true;
       }
     }
     if (!changed) break;
@@ -222,10 +224,11 @@ export function fitModel(model: PhModel, data: PhData, options: LmOptions = {}):
     run = again;
     starts += again.starts;
   }
-  if (status.some((s, j) => s === 'undetermined' && j >= model.nLinear && !model.runaway[j])) {
-    // a pKa gone to the wrong side takes the activity levels with it
+  if (wrongSide) {
+    // a pKa gone to the side where no simpler model waits takes the activity levels with it
     for (let k = 0; k < model.nLinear; k++) status[k] = 'undetermined';
   }
+  markWithoutInfluence(model, data, run.theta, spec, status);
   return {
     theta: run.theta,
     status,
@@ -236,4 +239,29 @@ export function fitModel(model: PhModel, data: PhData, options: LmOptions = {}):
     starts,
     spec,
   };
+}
+
+/**
+ * A fitted parameter with no influence on the fitted curve (a zero Jacobian column, e.g. the
+ * pKa values when all activities are zero) is not determined by the data.
+ */
+function markWithoutInfluence(
+  model: PhModel,
+  data: PhData,
+  theta: ArrayLike<number>,
+  spec: FitSpec,
+  status: CoreFit['status'],
+): void {
+  const p = model.names.length;
+  const { J } = modelJacobian(model, data, theta);
+  const norms = new Array<number>(p).fill(0);
+  for (let i = 0; i < data.n; i++) {
+    if (!(data.w[i] > 0)) continue;
+    for (let j = 0; j < p; j++) norms[j] += data.w[i] * J[i * p + j] * J[i * p + j];
+  }
+  const largest = Math.max(...norms.filter((_, j) => spec.fixed[j] === null));
+  for (let j = 0; j < p; j++) {
+    if (spec.fixed[j] === null && status[j] === 'free' && !(norms[j] > 1e-24 * largest))
+      status[j] = 'undetermined';
+  }
 }

@@ -51,22 +51,18 @@ export function buildFlags(f: FlagInput): Flag[] {
     const name = names[j];
     if (j >= m) {
       const side = model.runaway[j]?.side;
-      const where =
+      const message =
         status[j] === 'fixed'
-          ? side === -1
-            ? `below pH ${fmt(lo - DETERMINED_MARGIN)}`
-            : `above pH ${fmt(hi + DETERMINED_MARGIN)}`
-          : `more than ${DETERMINED_MARGIN} units outside the measured pH range`;
-      flags.push({
-        code: `${name}_not_determined`,
-        message:
-          `${name} is not determined: the data show no sign of it, and the fit improves as it moves ${where}. ` +
-          'It is reported as null, never as a runaway number; the simpler model is offered instead.',
-      });
+          ? `${name} is not determined: the data show no sign of it, and the fit improves as it moves ` +
+            `${side === -1 ? `below pH ${fmt(lo - DETERMINED_MARGIN)}` : `above pH ${fmt(hi + DETERMINED_MARGIN)}`}. ` +
+            'It is reported as null, never as a runaway number; the simpler model is offered instead.'
+          : `${name} is not determined: the data do not fix it (it moves more than ${DETERMINED_MARGIN} units ` +
+            'beyond the measured pH range, or the fitted curve does not depend on it). It is reported as null.';
+      flags.push({ code: `${name}_not_determined`, message });
     } else {
       flags.push({
         code: `${name}_not_determined`,
-        message: `${name} is not determined: it describes activity beyond a pKa the data do not reach.`,
+        message: `${name} is not determined: it depends on a pKa the data do not fix.`,
       });
     }
   }

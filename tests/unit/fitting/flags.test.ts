@@ -76,4 +76,28 @@ describe('flags', () => {
     );
     expect(r.value.flags.map((f) => f.code)).toContain('pKa_too_close');
   });
+  it('both pKa values not determined on flat data (V is their mean) and on all-zero data (V = 0)', () => {
+    const pH = grid(4, 9, 10);
+    const flat = fitProfile({ pH, v: [5, 5.1, 4.9, 5, 5.05, 4.95, 5, 5.02, 4.98, 5] }, { profile: false });
+    const zero = fitProfile({ pH, v: new Array<number>(10).fill(0) }, { profile: false });
+    if (!flat.ok || !zero.ok) throw new Error('fit failed');
+    expect(flat.value.parameters.V.value).toBeCloseTo(5, 9);
+    expect(zero.value.parameters.V.value).toBe(0);
+    for (const f of [flat.value, zero.value]) {
+      expect(f.parameters.pKa1.value).toBeNull();
+      expect(f.parameters.pKa2.value).toBeNull();
+      expect(f.pHopt.value).toBeNull();
+      expect(f.flags.map((x) => x.code)).toEqual(
+        expect.arrayContaining(['pKa1_not_determined', 'pKa2_not_determined']),
+      );
+    }
+  });
+  it('V is not determined either when a pKa runs off on the side where no simpler model waits', () => {
+    // invented: pure exponential rise 10^(pH − 6) from pH 4 to 6, no sign of a plateau
+    const pH = grid(4, 6, 8);
+    const codes = fitProfile({ pH, v: pH.map((x) => 10 ** (x - 6)) }, { profile: false });
+    if (!codes.ok) throw new Error(codes.error.message);
+    expect(codes.value.parameters.V.value).toBeNull();
+    expect(codes.value.flags.map((x) => x.code)).toContain('V_not_determined');
+  });
 });
