@@ -10,6 +10,7 @@ import { createDatabaseIfMissing, freePort, removeCluster, startCluster } from '
 import { seedDemo } from '../server/db/seed';
 import { startFakeSmtp } from '../server/mail/fake-smtp';
 import { createMailer } from '../server/mail/mailer';
+import { createAppJobs } from '../server/jobs/app-jobs';
 import { e2eSessionSecret, e2eStateFile } from './state';
 
 const port = Number(process.env.E2E_PORT ?? 3100);
@@ -38,11 +39,14 @@ try {
   await seedDemo(db);
   const smtp = await startFakeSmtp(db, 0);
   const mailer = createMailer({ host: '127.0.0.1', port: smtp.port }, 'Bellwether <bellwether@localhost>');
+  const log = { info: () => {}, warn: (m: string) => console.error(m) };
+  const jobs = createAppJobs(url, db, log);
   const app = createApp({
     db,
     pool,
     mailer,
-    log: { info: () => {}, warn: (m) => console.error(m) },
+    jobs,
+    log,
     config: {
       appUrl: `http://localhost:${port}`,
       sessionSecret: e2eSessionSecret,
@@ -59,6 +63,7 @@ try {
   closing = async () => {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     server.closeAllConnections();
+    await jobs.stop();
     mailer.close();
     await smtp.close();
     await pool.end();

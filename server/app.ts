@@ -12,10 +12,12 @@ import { loadCurrentUser } from './auth/current-user';
 import type { AppContext } from './context';
 import { AppError } from './errors';
 import { registerAdminRoutes } from './routes/admin';
+import { registerAnalysisRoutes } from './routes/analysis';
 import { registerAssayRoutes } from './routes/assays';
 import { registerAuthRoutes } from './routes/auth';
 import { registerBufferSeriesRoutes } from './routes/buffer-series';
 import { registerBufferRoutes } from './routes/buffers';
+import { registerComparisonRoutes } from './routes/comparisons';
 import { registerEnzymeRoutes } from './routes/enzymes';
 import { registerHealthRoutes } from './routes/health';
 import { registerPlateRoutes } from './routes/plates';
@@ -38,6 +40,8 @@ const routeModules: ((api: Router, ctx: AppContext) => void)[] = [
   registerReviewRoutes,
   registerBufferRoutes,
   registerBufferSeriesRoutes,
+  registerAnalysisRoutes,
+  registerComparisonRoutes,
 ];
 
 function sessionMiddleware({ pool, config }: AppDeps) {

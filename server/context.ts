@@ -1,4 +1,5 @@
 import type { Db } from './db/client';
+import type { JobQueue } from './jobs/queue';
 import type { Mail, Mailer } from './mail/mailer';
 
 export type AppConfig = {
@@ -16,7 +17,7 @@ export type AppConfig = {
 
 export type Logger = { info: (msg: string) => void; warn: (msg: string) => void };
 
-export type AppContext = { db: Db; config: AppConfig; mailer: Mailer; log: Logger };
+export type AppContext = { db: Db; config: AppConfig; mailer: Mailer; log: Logger; jobs: JobQueue };
 
 /** Sends after the change is committed; a mail failure is reported, never rolls the change back. */
 export async function sendAfterCommit(ctx: AppContext, mail: Mail | null): Promise<boolean> {

@@ -14,6 +14,7 @@ import { openDatabase } from './database';
 import { readEnv } from './env';
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
 import { createMailer } from './mail/mailer';
+import { createAppJobs } from './jobs/app-jobs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const args = new Set(process.argv.slice(2));
@@ -68,11 +69,14 @@ async function main() {
     const mailer = createMailer(env.SMTP_URL ? { url: env.SMTP_URL } : { host: '127.0.0.1', port: smtp!.port }, env.MAIL_FROM);
     cleanups.push(() => mailer.close());
 
+    const jobs = createAppJobs(database.url, db, log);
+    cleanups.push(() => jobs.stop());
     const app = createApp({
       db,
       pool,
       mailer,
       log,
+      jobs,
       config: {
         appUrl,
         sessionSecret: sessionSecret(dataDir, env.SESSION_SECRET),

@@ -388,3 +388,118 @@ export const studyEvents = pgTable(
   },
   (t) => [index('study_events_study_idx').on(t.studyId, t.createdAt)],
 );
+
+// ---- Analysis: settings, exclusions, stored results and fits, background jobs ----
+
+export const analysisSettings = pgTable('analysis_settings', {
+  studyId: uuid()
+    .primaryKey()
+    .references(() => studies.id, { onDelete: 'cascade' }),
+  teamId: teamRef(),
+  /** shared/analysis AnalysisSettings plus which read and preparation to use (server/services/analysis). */
+  settings: jsonb().notNull(),
+  version: integer().notNull().default(1),
+  updatedBy: userRef(),
+  updatedAt: updatedAt(),
+});
+
+/** A well left out of the analysis, always with a reason; lifting keeps the row (and its reason). */
+export const exclusions = pgTable(
+  'exclusions',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    teamId: teamRef(),
+    studyId: uuid()
+      .notNull()
+      .references(() => studies.id, { onDelete: 'cascade' }),
+    plateId: uuid()
+      .notNull()
+      .references(() => plates.id, { onDelete: 'cascade' }),
+    well: varchar({ length: 4 }).notNull(),
+    reason: text().notNull(),
+    createdBy: userRef(),
+    createdAt: createdAt(),
+    liftedAt: timestamp({ withTimezone: true }),
+    liftedBy: uuid().references(() => users.id),
+    liftReason: text(),
+  },
+  (t) => [index('exclusions_study_idx').on(t.studyId)],
+);
+
+/** The latest analysis of a study, keyed by the hash of everything that went into it. */
+export const analysisRuns = pgTable('analysis_runs', {
+  studyId: uuid()
+    .primaryKey()
+    .references(() => studies.id, { onDelete: 'cascade' }),
+  teamId: teamRef(),
+  engineVersion: text().notNull(),
+  analysisVersion: text().notNull(),
+  inputHash: text().notNull(),
+  result: jsonb().notNull(),
+  computedAt: createdAt(),
+  /** Bootstrap intervals, valid for the input hash they were computed from. */
+  bootstrap: jsonb(),
+  bootstrapHash: text(),
+  bootstrapAt: timestamp({ withTimezone: true }),
+});
+
+/** One fitted profile per variant and study: what comparisons read. */
+export const profileFits = pgTable(
+  'profile_fits',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    teamId: teamRef(),
+    studyId: uuid()
+      .notNull()
+      .references(() => studies.id, { onDelete: 'cascade' }),
+    variantId: uuid()
+      .notNull()
+      .references(() => variants.id, { onDelete: 'cascade' }),
+    engineVersion: text().notNull(),
+    inputHash: text().notNull(),
+    model: text(),
+    profile: jsonb().notNull(),
+    computedAt: createdAt(),
+  },
+  (t) => [uniqueIndex('profile_fits_study_variant_key').on(t.studyId, t.variantId)],
+);
+
+export const analysisJobs = pgTable('analysis_jobs', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  studyId: uuid()
+    .notNull()
+    .references(() => studies.id, { onDelete: 'cascade' }),
+  kind: text().notNull(),
+  /** queued | running | done | failed */
+  state: text().notNull().default('queued'),
+  done: integer().notNull().default(0),
+  total: integer().notNull().default(0),
+  error: text(),
+  inputHash: text(),
+  options: jsonb(),
+  requestedBy: userRef(),
+  createdAt: createdAt(),
+  startedAt: timestamp({ withTimezone: true }),
+  finishedAt: timestamp({ withTimezone: true }),
+});
+
+// ---- Comparisons of variants across studies ----
+
+export const comparisons = pgTable('comparisons', {
+  id: uuid().primaryKey().defaultRandom(),
+  teamId: teamRef(),
+  name: text().notNull(),
+  /** [{ studyId, variantId }] in display order. */
+  entries: jsonb().notNull(),
+  /** `${studyId}:${variantId}` of the reference profile. */
+  referenceKey: text().notNull(),
+  includeUnapproved: boolean().notNull().default(false),
+  /** Optional global fit: { model, shared: ['pKa1'] }. */
+  globalFit: jsonb(),
+  notes: text().notNull().default(''),
+  createdBy: userRef(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+  version: integer().notNull().default(1),
+});

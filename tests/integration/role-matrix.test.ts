@@ -4,7 +4,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRouteList } from '../../server/app';
 import { eq } from 'drizzle-orm';
-import { bufferSeries, mailMessages, plates, plateTemplates, readerFiles, reads, studies } from '../../server/db/schema';
+import { analysisJobs, bufferSeries, comparisons, exclusions, mailMessages, plates, plateTemplates, readerFiles, reads, studies } from '../../server/db/schema';
 import { seedBuiltInBuffers } from '../../server/services/buffers/library';
 import { startTestApp, type TestApp } from './helpers/app';
 import { createTeam, createUser } from './helpers/factories';
@@ -96,10 +96,39 @@ const rules: Record<string, string> = {
   'PATCH /api/buffer-series/:id': '401 403 400 400 400 400',
   'DELETE /api/buffer-series/:id': '401 403 409 409 409 404',
   'GET /api/buffer-series/:id/recipes.xlsx': '401 ok ok ok ok 404',
+  // Analysis of the approved study (it has no reads, so the analysis itself answers 422).
+  'GET /api/studies/:id/analysis': '401 ok ok ok ok 404',
+  'PUT /api/studies/:id/analysis/settings': '401 403 400 400 400 400',
+  'POST /api/studies/:id/exclusions': '401 403 400 400 400 400',
+  'POST /api/exclusions/:id/lift': '401 403 400 400 400 400',
+  'POST /api/studies/:id/analysis/recompute': '401 ok ok ok ok 404',
+  'POST /api/studies/:id/analysis/bootstrap': '401 403 ok ok ok 404',
+  'GET /api/analysis-jobs/:id': '401 ok ok ok ok 404',
+  'GET /api/home': '401 ok ok ok ok ok',
+  'GET /api/comparisons/profiles': '401 ok ok ok ok ok',
+  'POST /api/comparisons/preview': '401 400 400 400 400 400',
+  'GET /api/comparisons': '401 ok ok ok ok ok',
+  'POST /api/comparisons': '401 403 400 400 400 400',
+  'GET /api/comparisons/:id': '401 ok ok ok ok 404',
+  'PUT /api/comparisons/:id': '401 403 400 400 400 400',
+  'DELETE /api/comparisons/:id': '401 403 204 204 204 404',
+  'GET /api/comparisons/:id/export.xlsx': '401 ok ok ok ok 404',
+  'GET /api/comparisons/:id/export.csv': '401 ok ok ok ok 404',
+  'GET /api/studies/:id/export.xlsx': '401 ok ok ok ok 404',
+  'GET /api/studies/:id/export.csv': '401 ok ok ok ok 404',
+};
+
+const newComparison = async () => {
+  const [row] = await t.db
+    .insert(comparisons)
+    .values({ teamId: world.study.teamId, name: 'C', entries: [{ studyId: world.study.id, variantId: world.parent.id }], referenceKey: `${world.study.id}:${world.parent.id}`, createdBy: world.study.ownerId })
+    .returning();
+  return row.id;
 };
 
 /** Routes that destroy their target get a fresh one for every caller. */
 const freshTarget: Record<string, () => Promise<Record<string, string>>> = {
+  'DELETE /api/comparisons/:id': async () => ({ id: await newComparison() }),
   'DELETE /api/preparations/:id': async () => ({ id: (await createPreparation(t.db, world.variant)).id }),
   'DELETE /api/plate-templates/:id': async () => {
     const [tpl] = await t.db.insert(plateTemplates).values({ teamId: world.study.teamId, name: 'T', format: 96, map: { wells: {} }, createdBy: world.study.ownerId }).returning();
@@ -147,6 +176,7 @@ beforeAll(async () => {
     .returning();
   await t.db.update(studies).set({ bufferSeriesId: series.id }).where(eq(studies.id, world.study.id));
   ids['buffer-series'] = series.id;
+
   const [plate] = await t.db
     .insert(plates)
     .values({ teamId: teamA.id, studyId: world.study.id, name: 'P', format: 96, map: { wells: {} }, createdBy: people.scientist.id })
@@ -160,6 +190,15 @@ beforeAll(async () => {
     .values({ teamId: teamA.id, plateId: plate.id, fileId: file.id, blockIndex: 0, kind: 'endpoint', label: 'r', sheet: 's', location: 'A1:M9' })
     .returning();
   Object.assign(ids, { plates: plate.id, 'reader-files': file.id, reads: read.id, buffers: 'tris' });
+  const [exclusion] = await t.db
+    .insert(exclusions)
+    .values({ teamId: teamA.id, studyId: world.study.id, plateId: plate.id, well: 'A1', reason: 'matrix', createdBy: people.scientist.id })
+    .returning();
+  const [job] = await t.db
+    .insert(analysisJobs)
+    .values({ teamId: teamA.id, studyId: world.study.id, kind: 'bootstrap', state: 'done', requestedBy: people.scientist.id })
+    .returning();
+  Object.assign(ids, { exclusions: exclusion.id, 'analysis-jobs': job.id, comparisons: await newComparison() });
   await seedBuiltInBuffers(t.db);
 });
 

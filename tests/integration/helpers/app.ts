@@ -7,6 +7,7 @@ import { createDb, type Db } from '../../../server/db/client';
 import { mailMessages } from '../../../server/db/schema';
 import { startFakeSmtp } from '../../../server/mail/fake-smtp';
 import { createMailer } from '../../../server/mail/mailer';
+import { createAppJobs } from '../../../server/jobs/app-jobs';
 
 export const testSessionSecret = 'test-session-secret-that-is-long-enough-0123456789';
 
@@ -30,13 +31,15 @@ export async function startTestApp(overrides: Partial<AppConfig> = {}) {
   };
   // A server-side failure (500) reaches console.error, which fails the test.
   const log = { info: () => {}, warn: (m: string) => console.error(m) };
-  const app = createApp({ db, pool, mailer, log, config });
+  const jobs = createAppJobs(url, db, log);
+  const app = createApp({ db, pool, mailer, log, config, jobs });
   return {
     app,
     db,
     pool,
     config,
     async close() {
+      await jobs.stop();
       mailer.close();
       await smtp.close();
       await pool.end();
