@@ -12,7 +12,7 @@ export type TrueProfile = { V: number; pKa1: number; pKa2: number };
 export const demoTruth: Record<string, TrueProfile> = {
   'FR1-WT': { V: 2.0, pKa1: 3.7, pKa2: 6.3 },
   'FR1-D92N': { V: 1.8, pKa1: 3.0, pKa2: 6.2 },
-  'FR1-E228Q': { V: 2.1, pKa1: 3.62, pKa2: 6.35 },
+  'FR1-E228Q': { V: 2.1, pKa1: 3.68, pKa2: 6.32 },
   'FR1-D92N/S110A': { V: 1.5, pKa1: 2.95, pKa2: 6.0 },
   'FR1-K301E': { V: 1.9, pKa1: 3.72, pKa2: 6.3 },
 };
