@@ -82,6 +82,9 @@ export function PointRow(props: PointRowProps) {
               <span className="text-sm text-ink-muted tabular-nums">
                 β {formatSig(p.overlap.capacity * 1000, 3)}
               </span>
+              {p.overlap.systemId === p.proposal?.systemId && (
+                <span className="block text-sm text-warn-800">same buffer as the one chosen</span>
+              )}
             </span>
           ) : (
             <span className="text-ink-faint">—</span>
@@ -126,6 +129,7 @@ export function PointRow(props: PointRowProps) {
                 Made up at {p.makeUp.temperatureC} °C: set the pH meter to{' '}
                 <strong className="tabular-nums">{formatFixed(p.makeUp.setPH, 2)}</strong>
                 {p.makeUp.naiveAssayPH !== null &&
+                  Math.abs(p.makeUp.naiveAssayPH - p.pH) >= 0.005 &&
                   ` (set to ${key} there, it would read ${formatFixed(p.makeUp.naiveAssayPH, 2)} at the assay temperature)`}
                 .
               </p>

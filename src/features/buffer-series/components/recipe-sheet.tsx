@@ -103,6 +103,9 @@ export function RecipeSheet({ name, design, request, version }: RecipeSheetProps
           {rows.map(({ p, recipe, role, capacity }) => {
             const notes = [
               ...(role === 'overlap' ? ['overlap point'] : []),
+              ...(role === 'overlap' && p.overlap?.systemId === p.proposal?.systemId
+                ? ['same buffer as the one chosen']
+                : []),
               ...(role === 'main' && design.overridden.includes(phKey(p.pH)) ? ['chosen by hand'] : []),
               ...(role === 'main' && p.weak && p.proposal ? ['weak capacity'] : []),
               ...(role === 'main' && p.well && Math.abs(p.well.drift) > DRIFT_LIMIT
