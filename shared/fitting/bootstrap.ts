@@ -97,7 +97,7 @@ export function percentile95(values: readonly number[], scale = 1): Interval | n
 export function attachBootstrap(fit: ProfileFit, ctx: FitContext, resamples: number, seed: number): void {
   const { model, data, core, free, determined } = ctx;
   if (!core.converged || ctx.dof <= 0) return;
-  const fitted = Float64Array.from(ctx.fitted); // ctx.fitted lives in a scratch buffer
+  const fitted = ctx.fitted.slice(0, data.n); // ctx.fitted lives in a reused buffer
   const draws = residualBootstrap(
     model,
     data,

@@ -5,7 +5,7 @@
 /**
  * Solves (A + λ·diag(d)) x = b by Cholesky on the Jacobi-scaled matrix (unit diagonal), which
  * keeps the factorization accurate when the parameters have very different scales.
- * `work` needs p*p + p entries. Returns false when the matrix is not positive definite.
+ * L (p×p) and s (p) are work space. Returns false when the matrix is not positive definite.
  */
 export function dampedCholeskySolve(
   A: Float64Array,
@@ -14,10 +14,9 @@ export function dampedCholeskySolve(
   b: Float64Array,
   x: Float64Array,
   p: number,
-  work: Float64Array,
+  L: Float64Array,
+  s: Float64Array, // scaling 1/sqrt(diag)
 ): boolean {
-  const L = work; // p*p
-  const s = work.subarray(p * p, p * p + p); // scaling 1/sqrt(diag)
   for (let i = 0; i < p; i++) {
     const di = A[i * p + i] + lambda * d[i];
     if (!(di > 0) || !Number.isFinite(di)) return false;

@@ -8,7 +8,6 @@
 // and is accepted when the gain ratio ρ = (SSR − SSR(θ+δ)) / (2δᵀJᵀr − δᵀJᵀJδ) is positive.
 
 import { dampedCholeskySolve, normalEquations } from './linalg';
-import { scratch } from './scratch';
 
 export type StopReason =
   'converged-gradient' | 'converged-step' | 'converged-ssr' | 'max-iterations' | 'singular' | 'non-finite';
@@ -61,6 +60,61 @@ function clampInto(
   }
 }
 
+interface Workspace {
+  r: Float64Array;
+  J: Float64Array;
+  rT: Float64Array;
+  JT: Float64Array;
+  A: Float64Array;
+  As: Float64Array;
+  L: Float64Array;
+  s: Float64Array;
+  g: Float64Array;
+  gs: Float64Array;
+  D: Float64Array;
+  delta: Float64Array;
+  trial: Float64Array;
+  held: Float64Array;
+}
+
+// One workspace per number of parameters, grown for more points when needed: creating typed
+// arrays costs more than the arithmetic of a small fit. The solver never calls itself, so a
+// workspace is never in use twice at once.
+const workspaces = new Map<number, Workspace>();
+
+function workspace(n: number, p: number): Workspace {
+  let ws = workspaces.get(p);
+  if (!ws) {
+    const small = () => new Float64Array(p);
+    const square = () => new Float64Array(p * p);
+    ws = {
+      r: new Float64Array(0),
+      J: new Float64Array(0),
+      rT: new Float64Array(0),
+      JT: new Float64Array(0),
+      A: square(),
+      As: square(),
+      L: square(),
+      s: small(),
+      g: small(),
+      gs: small(),
+      D: small(),
+      delta: small(),
+      trial: small(),
+      held: small(),
+    };
+    workspaces.set(p, ws);
+  }
+  if (ws.r.length < n) {
+    const size = Math.max(n, 64, 2 * ws.r.length);
+    ws.r = new Float64Array(size);
+    ws.rT = new Float64Array(size);
+    ws.J = new Float64Array(size * p);
+    ws.JT = new Float64Array(size * p);
+  }
+  return ws;
+}
+
 export function levenbergMarquardt(
   problem: LsqProblem,
   start: ArrayLike<number>,
@@ -75,21 +129,10 @@ export function levenbergMarquardt(
 
   const theta = Array.from(start); // small plain arrays are cheaper to create than typed ones
   clampInto(theta, lower, upper);
-  // Buffers come from the scratch pool and are used only up to n and p.
-  let r = scratch('lm.r', n);
-  let J = scratch('lm.J', n * p);
-  let rT = scratch('lm.rT', n);
-  let JT = scratch('lm.JT', n * p);
-  const small = scratch('lm.small', 4 * p * p + 8 * p);
-  const A = small.subarray(0, p * p);
-  const As = small.subarray(p * p, 2 * p * p);
-  const work = small.subarray(2 * p * p, 3 * p * p + p);
-  const g = small.subarray(3 * p * p + p, 3 * p * p + 2 * p);
-  const gs = small.subarray(3 * p * p + 2 * p, 3 * p * p + 3 * p);
-  const D = small.subarray(3 * p * p + 3 * p, 3 * p * p + 4 * p);
-  const delta = small.subarray(3 * p * p + 4 * p, 3 * p * p + 5 * p);
-  const trial = small.subarray(3 * p * p + 5 * p, 3 * p * p + 6 * p);
-  const held = small.subarray(3 * p * p + 6 * p, 3 * p * p + 7 * p);
+  // Buffers are reused from call to call and used only up to n and p.
+  const ws = workspace(n, p);
+  let { r, J, rT, JT } = ws;
+  const { A, As, L, s: scale, g, gs, D, delta, trial, held } = ws;
   let evaluations = 1;
   const done = (reason: StopReason, ssr: number, iterations: number): LmResult => {
     let stop = reason;
@@ -143,7 +186,7 @@ export function levenbergMarquardt(
 
     // Inner loop: raise λ until a step lowers SSR.
     for (;;) {
-      if (!dampedCholeskySolve(As, D, lambda, gs, delta, p, work)) {
+      if (!dampedCholeskySolve(As, D, lambda, gs, delta, p, L, scale)) {
         lambda *= nu;
         nu *= 2;
         if (!Number.isFinite(lambda) || lambda > 1e30) return done('singular', ssr, it);
@@ -176,8 +219,12 @@ export function levenbergMarquardt(
       if (actual > 0 && rho > 0) {
         for (let j = 0; j < p; j++) theta[j] = trial[j];
         ssr = ssrT;
-        [r, rT] = [rT, r];
-        [J, JT] = [JT, J];
+        const rOld = r;
+        r = rT;
+        rT = rOld;
+        const JOld = J;
+        J = JT;
+        JT = JOld;
         normalEquations(J, r, n, p, A, g);
         for (let j = 0; j < p; j++) D[j] = Math.max(D[j], A[j * p + j]);
         lambda *= Math.max(1 / 3, 1 - Math.pow(2 * rho - 1, 3));

@@ -102,17 +102,30 @@ export function phProblem(model: PhModel, data: PhData, map: AffineMap | null): 
   };
 }
 
+const jacobianSpace = new Map<
+  number,
+  { J: Float64Array; f: Float64Array; grad: Float64Array; k: Float64Array }
+>();
+
 /**
- * Model Jacobian ∂f/∂θ (n×p, unweighted) and fitted values at θ, in scratch buffers that stay
- * valid until the next call (copy what must be kept).
+ * Model Jacobian ∂f/∂θ (row-major, unweighted) and fitted values at θ, in reused buffers that
+ * may be longer than n and stay valid until the next call with as many parameters (copy what
+ * must be kept).
  */
 export function modelJacobian(model: PhModel, data: PhData, theta: ArrayLike<number>) {
   const p = model.names.length;
-  const buf = scratch('jacobian', data.n * p + data.n + p + 4);
-  const J = buf.subarray(0, data.n * p);
-  const f = buf.subarray(data.n * p, data.n * p + data.n);
-  const grad = buf.subarray(data.n * p + data.n, data.n * p + data.n + p);
-  const k = buf.subarray(data.n * p + data.n + p, data.n * p + data.n + p + 4);
+  let space = jacobianSpace.get(p);
+  if (!space || space.f.length < data.n) {
+    const size = Math.max(data.n, 64, 2 * (space?.f.length ?? 0));
+    space = {
+      J: new Float64Array(size * p),
+      f: new Float64Array(size),
+      grad: new Float64Array(p),
+      k: new Float64Array(4),
+    };
+    jacobianSpace.set(p, space);
+  }
+  const { J, f, grad, k } = space;
   model.constants(theta, k);
   for (let i = 0; i < data.n; i++) {
     f[i] = model.point(theta, k, data.h[i], data.g[i], grad);

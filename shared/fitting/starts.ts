@@ -84,13 +84,6 @@ export function gridStarts(
   const step = (hi - lo) / GRID_STEPS;
   const grid: number[] = [];
   for (let i = 0; i <= GRID_STEPS; i++) grid.push(lo + i * step);
-  const buf = scratch('grid', p + data.n * m + m + 4 + m * (m + 1));
-  const theta = buf.subarray(0, p);
-  for (let j = 0; j < p; j++) theta[j] = fixed[j] ?? 0;
-  const phi = buf.subarray(p, p + data.n * m);
-  const row = buf.subarray(p + data.n * m, p + data.n * m + m);
-  const k = buf.subarray(p + data.n * m + m, p + data.n * m + m + 4);
-  const work = buf.subarray(p + data.n * m + m + 4, p + data.n * m + m + 4 + m * (m + 1));
   const best: GridPoint[] = [];
   let syy = 0;
   for (let i = 0; i < data.n; i++) syy += data.w[i] * data.y[i] * data.y[i];
@@ -109,6 +102,13 @@ export function gridStarts(
     return best;
   }
 
+  const buf = scratch('grid', p + data.n * m + m + 4 + m * (m + 1));
+  const theta = buf.subarray(0, p);
+  for (let j = 0; j < p; j++) theta[j] = fixed[j] ?? 0;
+  const phi = buf.subarray(p, p + data.n * m);
+  const row = buf.subarray(p + data.n * m, p + data.n * m + m);
+  const k = buf.subarray(p + data.n * m + m, p + data.n * m + m + 4);
+  const work = buf.subarray(p + data.n * m + m + 4, p + data.n * m + m + 4 + m * (m + 1));
   const visit = (depth: number, from: number): void => {
     if (depth === freePKa.length) {
       model.constants(theta, k);
