@@ -3,6 +3,7 @@
 // FR1-WT; FR1-E228Q differs by 0.02, within error.
 import { eq } from 'drizzle-orm';
 import ExcelJS from 'exceljs';
+import type request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ComparisonView } from '../../shared/schemas/comparisons';
 import { studies, studyVariants, variants } from '../../server/db/schema';
@@ -20,7 +21,8 @@ let kinetic: typeof studies.$inferSelect;
 let endpoint: typeof studies.$inferSelect;
 const variantId: Record<string, string> = {};
 
-const binary = (res: NodeJS.ReadableStream, done: (e: Error | null, b: Buffer) => void) => {
+type Parser = Parameters<ReturnType<ReturnType<typeof request>['get']>['parse']>[0];
+const binary: Parser = (res, done) => {
   const chunks: Buffer[] = [];
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => done(null, Buffer.concat(chunks)));
@@ -35,7 +37,7 @@ beforeAll(async () => {
   const o = await createUser(t.db, { role: 'lead', teamIds: [(await createTeam(t.db)).id] });
   outsider = await signIn(t, o.email, o.password);
   [kinetic] = await t.db.select().from(studies).where(eq(studies.name, 'FR1 variants, kinetic pH profile (demo)'));
-  [endpoint] = await t.db.select().from(studies).where(eq(studies.name, 'FR1 parent baseline (demo)'));
+  [endpoint] = await t.db.select().from(studies).where(eq(studies.name, 'FR1 end-point profile, approved round (demo)'));
   for (const v of await t.db.select({ id: variants.id, name: variants.name }).from(studyVariants).innerJoin(variants, eq(variants.id, studyVariants.variantId)).where(eq(studyVariants.studyId, kinetic.id))) {
     variantId[v.name] = v.id;
   }

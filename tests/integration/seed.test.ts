@@ -38,9 +38,12 @@ describe('demo seed', () => {
     expect(first.assays).toBe(2);
     expect(first.buffer_series).toBe(1);
     expect(first.studies).toBe(3);
-    expect(first.plates).toBe(6);
-    expect(first.reader_files).toBe(6);
-    expect(first.well_records).toBe(6 * 96);
+    expect(first.plates).toBe(7);
+    expect(first.reader_files).toBe(7);
+    expect(first.well_records).toBe(7 * 96);
+    expect(first.exclusions).toBe(1);
+    expect(first.comparisons).toBe(1);
+    expect(first.analysis_runs).toBe(3);
     const scientist = await signIn(t, 'scientist@example.org', 'fennel-ridge-demo');
     const enzymes = await scientist.agent.get('/api/enzymes').expect(200);
     expect(enzymes.body.map((e: { name: string }) => e.name)).toEqual(['FR1 phytase']);

@@ -59,9 +59,11 @@ function slopes(map: PlateMap, truthOf: (variantId: string) => TrueProfile | und
 }
 
 /** A kinetic workbook: 31 reads 20 s apart, slight substrate-depletion curvature, 0.003 A noise. */
-export async function kineticWorkbook(plateName: string, map: PlateMap, truthOf: (id: string) => TrueProfile | undefined, seed: number) {
+export async function kineticWorkbook(plateName: string, map: PlateMap, truthOf: (id: string) => TrueProfile | undefined, seed: number, outlierWell?: string) {
   const noise = gaussian(seed);
   const slope = slopes(map, truthOf, noise);
+  // A generated outlier: one well runs 1.8 times too fast (as a bubble or a pipetting error would).
+  if (outlierWell && slope[outlierWell] !== undefined) slope[outlierWell] *= 1.8;
   const book = new ExcelJS.Workbook();
   const sheet = book.addWorksheet('Kinetic 410 nm');
   sheet.addRow(['Generated demo data (Bellwether) — not a real instrument export']);

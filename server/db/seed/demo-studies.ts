@@ -1,15 +1,16 @@
 // Demo studies with plates and generated reader files, imported through the same services the
 // import screen uses: a kinetic study in draft, an end-point study in review, an approved one.
-import { and, eq, sql } from 'drizzle-orm';
+import { and, asc, eq, sql } from 'drizzle-orm';
 import type { SeriesDetail } from '../../../shared/schemas/buffer-series';
 import type { AppContext } from '../../context';
+import { excludeWells, getAnalysis } from '../../services/analysis/analysis';
 import { createPlate, saveMap } from '../../services/plates/plates';
 import { importReads } from '../../services/plates/reads';
 import { createStudy } from '../../services/records/studies';
 import { transition } from '../../services/review/review';
 import type { CurrentUser } from '../../types';
 import type { Db } from '../client';
-import { assays, bufferSeries, enzymes, studies, teamMembers, teams, users, variants } from '../schema';
+import { assays, bufferSeries, enzymes, plates, studies, teamMembers, teams, users, variants } from '../schema';
 import { demoTeam } from './demo-people';
 import { demoAssays, demoEnzymeName } from './demo-records';
 import { demoPlateMap, demoTruth, endpointCsv, kineticWorkbook } from './demo-reads';
@@ -40,6 +41,12 @@ export const demoStudies: DemoStudy[] = [
       ['FR1-E228Q', 'FR1-D92N/S110A'],
       ['FR1-K301E', 'FR1-WT'],
     ],
+    outlier: { plate: 0, well: 'B6' },
+    finish: async (ctx, id) => {
+      const owner = await person(ctx.db, 'scientist@example.org');
+      const [plate] = await ctx.db.select().from(plates).where(eq(plates.studyId, id)).orderBy(asc(plates.createdAt)).limit(1);
+      await excludeWells(ctx.db, owner, id, { plateId: plate.id, wells: ['B6'], reason: 'Trace rises 1.8 times faster than its replicates; a bubble was noted at the first read (demo, generated outlier).' });
+    },
   },
   {
     name: 'FR1 end-point screen, round 1 (demo)',
@@ -56,16 +63,22 @@ export const demoStudies: DemoStudy[] = [
     },
   },
   {
-    name: 'FR1 parent baseline (demo)',
+    name: 'FR1 end-point profile, approved round (demo)',
     owner: 'scientist@example.org',
     assay: 'endpoint',
-    plates: [['FR1-WT', 'FR1-K301E']],
+    plates: [
+      ['FR1-WT', 'FR1-D92N'],
+      ['FR1-E228Q', 'FR1-K301E'],
+    ],
     finish: async (ctx, id) => {
-      await transition(ctx, await person(ctx.db, 'scientist@example.org'), id, 'submit', 'Baseline for the parent and the control mutation.');
-      await transition(ctx, await person(ctx.db, 'lead@example.org'), id, 'approve', 'Baseline accepted as the reference for later rounds.');
+      await getAnalysis(ctx.db, await person(ctx.db, 'scientist@example.org'), id);
+      await transition(ctx, await person(ctx.db, 'scientist@example.org'), id, 'submit', 'Parent, the acid-limb variant and two controls, end-point read after stopping with base.');
+      await transition(ctx, await person(ctx.db, 'lead@example.org'), id, 'approve', 'Fits and QC look sound; D92N moves the acid limb.');
     },
   },
 ];
+
+export { person as demoPerson };
 
 export async function seedDemoStudies(db: Db) {
   const team = await db.query.teams.findFirst({ where: eq(teams.name, demoTeam.name) });
@@ -104,7 +117,8 @@ export async function seedDemoStudies(db: Db) {
       await saveMap(db, owner, plate.id, plate.version, map);
       const seed = 1000 * (s + 1) + p;
       if (demo.assay === 'kinetic') {
-        const bytes = await kineticWorkbook(plateName, map, truthOf, seed);
+        const outlier = demo.outlier?.plate === p ? demo.outlier.well : undefined;
+        const bytes = await kineticWorkbook(plateName, map, truthOf, seed, outlier);
         await importReads(db, owner, plate.id, { bytes, fileName: `demo-kinetic-plate-${p + 1}.xlsx` }, [{ type: 'kinetic', blockIndex: 0, wavelengthNm: 410 }], 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
       } else {
         const outlier = demo.outlier?.plate === p ? demo.outlier.well : undefined;
@@ -113,5 +127,6 @@ export async function seedDemoStudies(db: Db) {
       }
     }
     await demo.finish?.(ctx, study.id);
+    await getAnalysis(db, owner, study.id);
   }
 }

@@ -8,6 +8,7 @@ import { writeAudit } from '../../services/audit/write-audit';
 import { seedBuiltInBuffers } from '../../services/buffers/library';
 import { demoPassword, demoPeople, demoTeam } from './demo-people';
 import { seedDemoRecords } from './demo-records';
+import { seedDemoComparison } from './demo-comparison';
 import { seedDemoStudies } from './demo-studies';
 
 export type SeedStep = { name: string; run: (db: Db) => Promise<void> };
@@ -39,6 +40,7 @@ export const seedSteps: SeedStep[] = [
   { name: 'buffer library', run: seedBuiltInBuffers },
   { name: 'enzyme, variants, assays and buffer series', run: seedDemoRecords },
   { name: 'studies, plates and generated reader files', run: seedDemoStudies },
+  { name: 'a saved comparison', run: seedDemoComparison },
 ];
 
 export async function seedDemo(db: Db, log: (line: string) => void = () => {}) {

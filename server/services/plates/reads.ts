@@ -23,7 +23,7 @@ async function parseOrRefuse(upload: Upload): Promise<ParsedReaderFile> {
   if (!result.ok) {
     const where = [result.error.sheet && `sheet '${result.error.sheet}'`, result.error.cell && `cell ${result.error.cell}`].filter(Boolean).join(', ');
     const status = result.error.code === 'too_large' ? 413 : result.error.code === 'internal' ? 422 : 400;
-    throw new AppError(`import_${result.error.code}`, `${result.error.message}${where && !result.error.message.includes(where) ? ` (${where})` : ''}`, status);
+    throw new AppError(`import_${result.error.code}`, `${result.error.message}${where && !result.error.message.toLowerCase().includes(where.toLowerCase()) ? ` (${where})` : ''}`, status);
   }
   return result.value;
 }
