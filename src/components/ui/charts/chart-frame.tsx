@@ -40,8 +40,16 @@ export type ChartFrameProps = {
 
 const margin = { top: 30, right: 18, bottom: 46, left: 62 };
 
-const tickLabelProps = () =>
-  ({ fill: chartTheme.inkMuted, fontSize: chartTheme.fontSize, fontFamily: 'inherit' }) as const;
+// visx's own defaults place the labels (anchor, offsets); giving props replaces them, so say them all.
+const tickText = { fill: chartTheme.inkMuted, fontSize: chartTheme.fontSize, fontFamily: 'inherit' } as const;
+const leftTickLabel = () => ({ ...tickText, textAnchor: 'end', dx: '-0.25em', dy: '0.33em' }) as const;
+const bottomTickLabel = () => ({ ...tickText, textAnchor: 'middle', dy: '0.25em' }) as const;
+const axisTitle = {
+  fill: chartTheme.ink,
+  fontSize: chartTheme.titleSize,
+  fontFamily: 'inherit',
+  textAnchor: 'middle',
+} as const;
 
 export function ChartFrame(props: ChartFrameProps) {
   const { title, xLabel, yLabel, height = 300, nice = true, legend, caption } = props;
@@ -96,10 +104,10 @@ export function ChartFrame(props: ChartFrameProps) {
               stroke={chartTheme.axis}
               tickStroke={chartTheme.axis}
               tickFormat={props.yTickFormat ? (v) => props.yTickFormat!(Number(v)) : undefined}
-              tickLabelProps={tickLabelProps}
+              tickLabelProps={leftTickLabel}
               label={yLabel}
               labelOffset={40}
-              labelProps={{ fill: chartTheme.ink, fontSize: chartTheme.titleSize, textAnchor: 'middle' }}
+              labelProps={axisTitle}
             />
             <AxisBottom
               top={innerHeight}
@@ -108,10 +116,10 @@ export function ChartFrame(props: ChartFrameProps) {
               stroke={chartTheme.axis}
               tickStroke={chartTheme.axis}
               tickFormat={props.xTickFormat ? (v) => props.xTickFormat!(Number(v)) : undefined}
-              tickLabelProps={tickLabelProps}
+              tickLabelProps={bottomTickLabel}
               label={xLabel}
               labelOffset={14}
-              labelProps={{ fill: chartTheme.ink, fontSize: chartTheme.titleSize, textAnchor: 'middle' }}
+              labelProps={axisTitle}
             />
           </Group>
           {rows.length > 0 && <ChartLegend rows={rows} x={margin.left} y={height + 12} />}

@@ -71,7 +71,7 @@ export function CapacityChart({ design, request, library }: CapacityChartProps) 
             p.overlap ? (
               <path
                 key={`o-${p.pH}`}
-                transform={`translate(${x(p.pH) + 7},${y(p.overlap.capacity * 1000)})`}
+                transform={`translate(${x(p.pH)},${y(p.overlap.capacity * 1000)})`}
                 d="M0 -5 L5 0 L0 5 L-5 0 Z"
                 fill="#fff"
                 stroke={chartTheme.inkMuted}
