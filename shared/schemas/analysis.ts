@@ -81,6 +81,8 @@ export type StudyAnalysis = {
   /** Bootstrap intervals are in `result` when their input hash matches this analysis. */
   bootstrap: { current: boolean; at: string | null; resamples: number | null };
   job: AnalysisJob | null;
+  /** Predicted well pH (buffer + enzyme + substrate, from the study's buffer series) against the nominal pH. */
+  wellPh: { pH: number; buffer: string | null; predicted: number | null; drift: number | null; overLimit: boolean }[];
 };
 
 export type EngineSettings = AnalysisSettings;

@@ -51,6 +51,9 @@ describe('analysis of the generated kinetic study', () => {
     expect(checked).toBeGreaterThanOrEqual(8);
     expect(inside).toBeGreaterThanOrEqual(checked - 1);
     expect(analysis.result.units.activity).toBeTruthy();
+    // The demo series adds enzyme (in 20 mM Tris pH 7.5) and substrate to each well: the predicted pH is reported per point.
+    expect(analysis.wellPh).toHaveLength(12);
+    expect(analysis.wellPh.every((w) => w.predicted !== null && Math.abs(w.predicted - w.pH) < 1)).toBe(true);
     // A second read of the unchanged study reuses the stored result (same hash and time).
     const again = await scientist.agent.get(`/api/studies/${kineticStudyId}/analysis`).expect(200);
     expect(again.body.inputHash).toBe(analysis.inputHash);

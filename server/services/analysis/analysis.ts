@@ -5,8 +5,9 @@ import { and, desc, eq, inArray } from 'drizzle-orm';
 import { analyseStudy, type AnalysisResult, type VariantProfile } from '../../../shared/analysis';
 import type { BootstrapSummary } from '../../../shared/fitting';
 import type { AnalysisJob, ExclusionView, StudyAnalysis, StudyAnalysisSettings } from '../../../shared/schemas/analysis';
+import type { DesignedSeries } from '../../../shared/schemas/buffer-series';
 import type { Db, DbOrTx } from '../../db/client';
-import { analysisJobs, analysisRuns, analysisSettings, exclusions, plates, preparations, profileFits, reads, studies, studyVariants, users } from '../../db/schema';
+import { analysisJobs, analysisRuns, analysisSettings, bufferSeries, exclusions, plates, preparations, profileFits, reads, studies, studyVariants, users } from '../../db/schema';
 import { AppError, badRequest, conflict } from '../../errors';
 import type { CurrentUser } from '../../types';
 import { writeAudit } from '../audit/write-audit';
@@ -128,7 +129,22 @@ export async function getAnalysis(db: Db, user: CurrentUser, studyId: string): P
     result: boot.result,
     bootstrap: { current: boot.current, at: boot.current ? (run?.bootstrapAt?.toISOString() ?? null) : null, resamples: boot.current ? (store?.resamples ?? null) : null },
     job: await latestJob(db, studyId, effectiveHash),
+    wellPh: await predictedWellPh(db, study),
   };
+}
+
+/** The series designer's predicted well pH at each point; drift beyond 0.05 pH is marked (SCIENCE.md §2.6). */
+async function predictedWellPh(db: DbOrTx, study: Study): Promise<StudyAnalysis['wellPh']> {
+  if (!study.bufferSeriesId) return [];
+  const series = await db.query.bufferSeries.findFirst({ where: eq(bufferSeries.id, study.bufferSeriesId) });
+  const design = series?.design as DesignedSeries | undefined;
+  return (design?.points ?? []).map((p) => ({
+    pH: p.pH,
+    buffer: p.proposal?.systemId ?? null,
+    predicted: p.well?.pH ?? null,
+    drift: p.well?.drift ?? null,
+    overLimit: p.well ? Math.abs(p.well.drift) > 0.05 : false,
+  }));
 }
 
 /** Recomputes an analysis from its inputs without storing it, and says what differs from the stored one. */
