@@ -26,3 +26,13 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown, where:
 export const body = <S extends z.ZodType>(req: Request, schema: S) => parseWith(schema, req.body, 'request body');
 export const query = <S extends z.ZodType>(req: Request, schema: S) => parseWith(schema, req.query, 'query');
 export const params = <S extends z.ZodType>(req: Request, schema: S) => parseWith(schema, req.params, 'address');
+
+/**
+ * For PATCH: the parsed body keeps only the fields the request actually sent, so defaults in a
+ * shared schema never overwrite stored values the client left out.
+ */
+export function patch<S extends z.ZodType>(req: Request, schema: S): Partial<z.output<S>> {
+  const parsed = parseWith(schema, req.body, 'request body') as Record<string, unknown>;
+  const sent = req.body && typeof req.body === 'object' ? Object.keys(req.body as object) : [];
+  return Object.fromEntries(Object.entries(parsed).filter(([key]) => sent.includes(key))) as Partial<z.output<S>>;
+}

@@ -5,7 +5,7 @@ import { teamFilterQuery } from '../../shared/schemas/enzymes';
 import { requirePermission } from '../auth/authorize';
 import type { AppContext } from '../context';
 import * as service from '../services/records/assays';
-import { body, params, query } from '../validate';
+import { body, params, patch, query } from '../validate';
 
 export function registerAssayRoutes(api: Router, { db }: AppContext) {
   api.get('/assays', async (req, res) => {
@@ -26,7 +26,7 @@ export function registerAssayRoutes(api: Router, { db }: AppContext) {
   api.patch('/assays/:id', async (req, res) => {
     const user = requirePermission(req, 'records:write');
     const { id } = params(req, idParams);
-    res.json(await service.updateAssay(db, user, id, body(req, assayUpdateSchema)));
+    res.json(await service.updateAssay(db, user, id, patch(req, assayUpdateSchema)));
   });
 
   api.delete('/assays/:id', async (req, res) => {

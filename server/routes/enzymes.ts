@@ -12,7 +12,7 @@ import {
 import { requirePermission } from '../auth/authorize';
 import type { AppContext } from '../context';
 import * as service from '../services/records/enzymes';
-import { body, params, query } from '../validate';
+import { body, params, patch, query } from '../validate';
 
 export function registerEnzymeRoutes(api: Router, { db }: AppContext) {
   api.get('/enzymes', async (req, res) => {
@@ -34,7 +34,7 @@ export function registerEnzymeRoutes(api: Router, { db }: AppContext) {
   api.patch('/enzymes/:id', async (req, res) => {
     const user = requirePermission(req, 'records:write');
     const { id } = params(req, idParams);
-    res.json(await service.updateEnzyme(db, user, id, body(req, enzymeUpdateSchema)));
+    res.json(await service.updateEnzyme(db, user, id, patch(req, enzymeUpdateSchema)));
   });
 
   api.delete('/enzymes/:id', async (req, res) => {
@@ -52,7 +52,7 @@ export function registerEnzymeRoutes(api: Router, { db }: AppContext) {
   api.patch('/variants/:id', async (req, res) => {
     const user = requirePermission(req, 'records:write');
     const { id } = params(req, idParams);
-    res.json(await service.updateVariant(db, user, id, body(req, variantUpdateSchema)));
+    res.json(await service.updateVariant(db, user, id, patch(req, variantUpdateSchema)));
   });
 
   api.delete('/variants/:id', async (req, res) => {
@@ -70,7 +70,7 @@ export function registerEnzymeRoutes(api: Router, { db }: AppContext) {
   api.patch('/preparations/:id', async (req, res) => {
     const user = requirePermission(req, 'records:write');
     const { id } = params(req, idParams);
-    res.json(await service.updatePreparation(db, user, id, body(req, preparationUpdateSchema)));
+    res.json(await service.updatePreparation(db, user, id, patch(req, preparationUpdateSchema)));
   });
 
   api.delete('/preparations/:id', async (req, res) => {

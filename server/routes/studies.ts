@@ -4,7 +4,7 @@ import { studyCreateSchema, studyListQuery, studyUpdateSchema } from '../../shar
 import { requirePermission } from '../auth/authorize';
 import type { AppContext } from '../context';
 import * as service from '../services/records/studies';
-import { body, params, query } from '../validate';
+import { body, params, patch, query } from '../validate';
 
 export function registerStudyRoutes(api: Router, { db }: AppContext) {
   api.get('/studies', async (req, res) => {
@@ -25,7 +25,7 @@ export function registerStudyRoutes(api: Router, { db }: AppContext) {
   api.patch('/studies/:id', async (req, res) => {
     const user = requirePermission(req, 'records:write');
     const { id } = params(req, idParams);
-    res.json(await service.updateStudy(db, user, id, body(req, studyUpdateSchema)));
+    res.json(await service.updateStudy(db, user, id, patch(req, studyUpdateSchema)));
   });
 
   api.delete('/studies/:id', async (req, res) => {

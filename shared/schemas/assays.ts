@@ -37,17 +37,25 @@ const assayFields = z.object({
 
 type AssayFields = z.infer<typeof assayFields>;
 
-function checkAssay(a: Partial<AssayFields>, ctx: z.RefinementCtx) {
+/** What a whole assay must satisfy, as field → message (empty when fine). */
+export function assayProblems(a: Partial<AssayFields>): Record<string, string> {
+  const problems: Record<string, string> = {};
   if (a.quantitation === 'extinction' && a.extinctionCoefficient == null) {
-    ctx.addIssue({ code: 'custom', path: ['extinctionCoefficient'], message: 'Give the extinction coefficient, or choose a standard curve.' });
+    problems.extinctionCoefficient = 'Give the extinction coefficient, or choose a standard curve.';
   }
   if (a.detection === 'fluorescence' && a.quantitation === 'extinction') {
-    ctx.addIssue({ code: 'custom', path: ['quantitation'], message: 'Fluorescence needs a standard curve; extinction coefficients apply to absorbance.' });
+    problems.quantitation = 'Fluorescence needs a standard curve; extinction coefficients apply to absorbance.';
   }
+  return problems;
+}
+
+function checkAssay(a: Partial<AssayFields>, ctx: z.RefinementCtx) {
+  for (const [field, message] of Object.entries(assayProblems(a))) ctx.addIssue({ code: 'custom', path: [field], message });
 }
 
 export const assayCreateSchema = assayFields.superRefine(checkAssay);
-export const assayUpdateSchema = assayFields.omit({ teamId: true }).partial().superRefine(checkAssay);
+/** Partial: the server checks the assay as a whole (stored values plus the change) with assayProblems. */
+export const assayUpdateSchema = assayFields.omit({ teamId: true }).partial();
 
 export type AssayCreateInput = z.input<typeof assayCreateSchema>;
 

@@ -67,7 +67,7 @@ export const phKey = (value: number) => value.toFixed(2);
 
 export type DesignedSeries = Series & { overridden: string[] };
 
-export type SeriesSummary = { id: string; teamId: string; name: string; input: SeriesRequest; updatedAt: string; createdBy: string };
+export type SeriesSummary = { id: string; teamId: string; teamName: string; name: string; input: SeriesRequest; updatedAt: string; createdBy: string };
 
 export type SeriesDetail = {
   id: string;

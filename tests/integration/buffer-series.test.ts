@@ -74,6 +74,7 @@ describe('buffer series designer', () => {
     const res = await scientist.agent.post('/api/buffer-series/design').set('X-CSRF-Token', scientist.csrf).send(request({ pHPoints: [6.5], overrides: { '6.50': alternative } })).expect(200);
     expect(res.body.points[0].proposal.systemId).toBe(alternative);
     expect(res.body.overridden).toEqual(['6.50']);
+    expect(res.body.points[0].alternatives.map((a: { systemId: string }) => a.systemId)).toContain(proposed);
     const far = await scientist.agent.post('/api/buffer-series/design').set('X-CSRF-Token', scientist.csrf).send(request({ pHPoints: [6.5], overrides: { '6.50': 'caps' } }));
     expect(far.status).toBe(400);
     expect(far.body.error.fields.overrides).toBeDefined();

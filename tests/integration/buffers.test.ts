@@ -79,6 +79,7 @@ describe('buffer library', () => {
     const res = await admin.agent.post('/api/buffers').set('X-CSRF-Token', admin.csrf).send(bad);
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/pKa25/);
+    expect(Object.keys(res.body.error.fields)).toContain('ionizations.0.pKa25');
     expect(await t.db.$count(bufferSystems, eq(bufferSystems.slug, 'lab-bad'))).toBe(0);
   });
 

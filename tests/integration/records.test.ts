@@ -118,6 +118,20 @@ describe('enzymes, variants and preparations', () => {
   });
 });
 
+describe('partial updates', () => {
+  it('when a PATCH sends one field, then the fields it left out keep their stored values', async () => {
+    const enzyme = await send(scientist, 'post', '/api/enzymes', { teamId, name: 'Keep fields', organism: 'generated organism', notes: 'keep me' }).expect(201);
+    const renamed = await send(scientist, 'patch', `/api/enzymes/${enzyme.body.id}`, { name: 'Kept fields' }).expect(200);
+    expect(renamed.body).toMatchObject({ name: 'Kept fields', organism: 'generated organism', notes: 'keep me' });
+    const assay = await send(scientist, 'post', '/api/assays', { ...validAssay(), name: 'Keep assay', stopSolution: '0.5 M NaOH' }).expect(201);
+    const edited = await send(scientist, 'patch', `/api/assays/${assay.body.id}`, { name: 'Kept assay' }).expect(200);
+    expect(edited.body).toMatchObject({ stopSolution: '0.5 M NaOH', chromophorePka: 7.15, extinctionCoefficient: 18300 });
+    const wrong = await send(scientist, 'patch', `/api/assays/${assay.body.id}`, { extinctionCoefficient: null });
+    expect(wrong.status).toBe(400);
+    expect(wrong.body.error.fields.extinctionCoefficient).toBeDefined();
+  });
+});
+
 describe('assays', () => {
   it('when an end-point assay reads an ionising chromophore without a stop solution, then its page carries the caution', async () => {
     const created = await send(scientist, 'post', '/api/assays', validAssay()).expect(201);

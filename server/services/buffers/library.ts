@@ -1,7 +1,8 @@
 // The buffer library: the built-in systems of shared/chemistry (seeded into the database, read-only)
 // and a lab's own systems, which admins add with their values and sources.
 import { asc, eq, sql } from 'drizzle-orm';
-import { bufferLibrary, bufferPKas, findBufferSystem, validateBufferSystem, type BufferSystem } from '../../../shared/chemistry';
+import { bufferLibrary, bufferPKas, bufferSystemSchema, findBufferSystem, validateBufferSystem, type BufferSystem } from '../../../shared/chemistry';
+import { parseWith } from '../../validate';
 import type { BufferDetail, BufferSummary } from '../../../shared/schemas/buffers-types';
 import type { Db, DbOrTx } from '../../db/client';
 import { bufferSeries, bufferSystems } from '../../db/schema';
@@ -53,8 +54,10 @@ export async function getBuffer(db: DbOrTx, slug: string): Promise<BufferDetail>
   return { ...summary(row), system: row.data as BufferSystem, createdAt: row.createdAt.toISOString(), updatedAt: row.updatedAt.toISOString() };
 }
 
+/** Checked against shared/chemistry's schema; each problem is named on its field. */
 function validated(candidate: unknown): BufferSystem {
-  const result = validateBufferSystem(candidate);
+  const parsed = parseWith(bufferSystemSchema, candidate, 'buffer system');
+  const result = validateBufferSystem(parsed);
   if (!result.ok) throw badRequest(result.error.message);
   return result.value;
 }

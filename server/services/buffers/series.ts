@@ -4,7 +4,7 @@ import { and, asc, desc, eq, inArray, type SQL } from 'drizzle-orm';
 import { designSeries, makeRecipe, type BufferSystem, type SeriesInput } from '../../../shared/chemistry';
 import { phKey, type DesignedSeries, type SeriesDetail, type SeriesRequest, type SeriesSummary } from '../../../shared/schemas/buffer-series';
 import type { Db } from '../../db/client';
-import { bufferSeries, studies, users } from '../../db/schema';
+import { bufferSeries, studies, teams, users } from '../../db/schema';
 import { badRequest, conflict } from '../../errors';
 import type { CurrentUser } from '../../types';
 import { writeAudit } from '../audit/write-audit';
@@ -61,7 +61,12 @@ export function designFromRequest(request: SeriesRequest, library: BufferSystem[
       const why = single.ok ? point?.warnings.join(' ') : single.error.message;
       throw badRequest(`${systemId} cannot serve pH ${key} at ${request.assayTemperatureC} °C. ${why ?? ''}`.trim(), { overrides: `Pick a system within one pH unit of ${key}.` });
     }
-    series.points[index] = { ...point, overlap: series.points[index].overlap };
+    const original = series.points[index];
+    // Keep the designer's own proposal among the alternatives, so the choice can be undone;
+    // an overlap point in the very system now chosen says nothing new and is dropped.
+    const alternatives = [...(original.proposal ? [original.proposal] : []), ...original.alternatives].filter((c) => c.systemId !== systemId);
+    const overlap = original.overlap && original.overlap.systemId !== systemId ? original.overlap : null;
+    series.points[index] = { ...point, alternatives, overlap };
     overridden.push(key);
   }
   return { ...series, overridden };
@@ -77,9 +82,10 @@ export async function listSeries(db: Db, user: CurrentUser, teamId?: string): Pr
   const conditions: SQL[] = [];
   if (scope) conditions.push(inArray(bufferSeries.teamId, scope));
   const rows = await db
-    .select({ id: bufferSeries.id, teamId: bufferSeries.teamId, name: bufferSeries.name, input: bufferSeries.input, updatedAt: bufferSeries.updatedAt, createdBy: users.name })
+    .select({ id: bufferSeries.id, teamId: bufferSeries.teamId, teamName: teams.name, name: bufferSeries.name, input: bufferSeries.input, updatedAt: bufferSeries.updatedAt, createdBy: users.name })
     .from(bufferSeries)
     .innerJoin(users, eq(users.id, bufferSeries.createdBy))
+    .innerJoin(teams, eq(teams.id, bufferSeries.teamId))
     .where(and(...conditions))
     .orderBy(desc(bufferSeries.updatedAt), asc(bufferSeries.name));
   return asJson<SeriesSummary[]>(rows);

@@ -1,9 +1,9 @@
 import { asc, count, eq, inArray } from 'drizzle-orm';
-import { assayCautions } from '../../../shared/schemas/assays';
+import { assayCautions, assayProblems } from '../../../shared/schemas/assays';
 import type { Assay, AssayDetail } from '../../../shared/schemas/records-types';
 import type { Db } from '../../db/client';
 import { assays, studies, teams } from '../../db/schema';
-import { conflict } from '../../errors';
+import { badRequest, conflict } from '../../errors';
 import type { CurrentUser } from '../../types';
 import { asJson, deleteAudited, insertAudited, listScope, loadVisible, updateAudited, visible } from './audited';
 
@@ -36,6 +36,8 @@ export async function createAssay(db: Db, actor: CurrentUser, input: AssayInput)
 export async function updateAssay(db: Db, actor: CurrentUser, id: string, change: Partial<AssayInput>) {
   return db.transaction(async (tx) => {
     const before = await loadVisible(tx, assays, id, actor, 'That assay');
+    const problems = assayProblems({ ...before, ...change } as Parameters<typeof assayProblems>[0]);
+    if (Object.keys(problems).length) throw badRequest(`Invalid request body. ${Object.values(problems)[0]}`, problems);
     return updateAudited(tx, actor, 'assay', assays, before, change);
   });
 }
