@@ -2,7 +2,9 @@
 import type { Role } from '../../shared/permissions';
 import { demo, demoUser, expect, test } from '../fixtures';
 
-const everyone = ['Home', 'Teams', 'Account'];
+// Every role reads the science records; only admins see the administration pages.
+const science = ['Studies', 'Enzymes', 'Assays', 'Buffer series', 'Buffer library'];
+const everyone = ['Home', ...science, 'Teams', 'Account'];
 const adminOnly = ['People', 'Outbox', 'Audit log'];
 
 const roleLabel: Record<Role, string> = {
@@ -30,7 +32,7 @@ for (const role of ['admin', 'lead', 'scientist', 'viewer'] as const) {
 
     const nav = page.getByRole('navigation', { name: 'Main' });
     const expected =
-      role === 'admin' ? ['Home', 'Teams', 'People', 'Outbox', 'Audit log', 'Account'] : everyone;
+      role === 'admin' ? ['Home', ...science, 'Teams', 'People', 'Outbox', 'Audit log', 'Account'] : everyone;
     await expect(nav.getByRole('link')).toHaveText(expected);
     for (const label of adminOnly) {
       await expect(nav.getByRole('link', { name: label })).toHaveCount(role === 'admin' ? 1 : 0);
