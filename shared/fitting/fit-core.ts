@@ -37,7 +37,33 @@ interface Mapped {
   map: AffineMap | null;
   lower: number[];
   upper: number[];
-  toFree: (theta: ArrayLike<number>) => number[];
+  /** model parameters fitted, in the order of the free vector */
+  free: number[];
+  ordered: boolean;
+  nLinear: number;
+}
+
+/** The free vector u of model parameters θ (inverse of the map: increments for an ordered chain). */
+function toFree(mapped: Mapped, theta: ArrayLike<number>): number[] {
+  const u: number[] = [];
+  let prev: number | null = null;
+  for (const j of mapped.free) {
+    if (j >= mapped.nLinear && mapped.ordered) {
+      u.push(prev === null ? theta[j] : Math.max(0, theta[j] - prev));
+      prev = theta[j];
+    } else {
+      u.push(theta[j]);
+    }
+  }
+  return u;
+}
+
+/** Model parameters θ of a free vector u. */
+function toTheta(mapped: Mapped, u: number[]): number[] {
+  if (!mapped.map) return u;
+  const theta = new Array<number>(mapped.map.p).fill(0);
+  applyMap(mapped.map, u, theta);
+  return theta;
 }
 
 export function buildMap(model: PhModel, data: PhData, spec: FitSpec): Mapped {
@@ -63,21 +89,24 @@ export function buildMap(model: PhModel, data: PhData, spec: FitSpec): Mapped {
   const free: number[] = [];
   for (let j = 0; j < p; j++) if (spec.fixed[j] === null && j !== pivot) free.push(j);
   const q = free.length;
-  const lower = new Array<number>(q).fill(-Infinity);
-  const upper = new Array<number>(q).fill(Infinity);
-  let firstPKa = -1;
-  free.forEach((j, k) => {
-    if (j < m) return;
-    if (ordered && firstPKa >= 0) {
-      lower[k] = 0;
-      upper[k] = highPKa - lowPKa;
+  const lower: number[] = [];
+  const upper: number[] = [];
+  let chained = false;
+  for (const j of free) {
+    if (j < m) {
+      lower.push(-Infinity);
+      upper.push(Infinity);
+    } else if (ordered && chained) {
+      lower.push(0);
+      upper.push(highPKa - lowPKa);
     } else {
-      lower[k] = lowPKa;
-      upper[k] = highPKa;
-      firstPKa = k;
+      lower.push(lowPKa);
+      upper.push(highPKa);
+      chained = true;
     }
-  });
-  if (q === p && !ordered) return { map: null, lower, upper, toFree: (t) => Array.from(t) };
+  }
+  const base = { lower, upper, free, ordered, nLinear: m };
+  if (q === p && !ordered) return { map: null, ...base };
   const c = new Float64Array(p);
   const M = new Float64Array(p * q);
   for (let j = 0; j < p; j++) c[j] = spec.fixed[j] ?? 0;
@@ -98,20 +127,7 @@ export function buildMap(model: PhModel, data: PhData, spec: FitSpec): Mapped {
       else M[pivot * q + free.indexOf(j)] = -con.a[j] / con.a[pivot];
     }
   }
-  const toFree = (theta: ArrayLike<number>): number[] => {
-    const u = new Array<number>(q).fill(0);
-    let prev: number | null = null;
-    free.forEach((j, k) => {
-      if (j >= m && ordered) {
-        u[k] = prev === null ? theta[j] : Math.max(0, theta[j] - prev);
-        prev = theta[j];
-      } else {
-        u[k] = theta[j];
-      }
-    });
-    return u;
-  };
-  return { map: { p, q, c, M }, lower, upper, toFree };
+  return { map: { p, q, c, M }, ...base };
 }
 
 function clampStart(u: number[], lower: number[], upper: number[]): number[] {
@@ -126,30 +142,29 @@ export function fitSpec(
   spec: FitSpec,
   options: LmOptions & { start?: ArrayLike<number> },
 ): { theta: number[]; lm: LmResult; starts: number } | null {
-  const { map, lower, upper, toFree } = buildMap(model, data, spec);
-  const problem = phProblem(model, data, map);
+  const mapped = buildMap(model, data, spec);
+  const { lower, upper } = mapped;
+  const problem = phProblem(model, data, mapped.map);
   const lmOptions: LmOptions = { ...options, lower, upper };
-  const toTheta = (u: number[]): number[] => {
-    if (!map) return u;
-    const theta = new Array<number>(model.names.length).fill(0);
-    applyMap(map, u, theta);
-    return theta;
-  };
   if (options.start) {
-    const lm = levenbergMarquardt(problem, clampStart(toFree(options.start), lower, upper), lmOptions);
-    return { theta: toTheta(lm.theta), lm, starts: 1 };
+    const lm = levenbergMarquardt(
+      problem,
+      clampStart(toFree(mapped, options.start), lower, upper),
+      lmOptions,
+    );
+    return { theta: toTheta(mapped, lm.theta), lm, starts: 1 };
   }
   const candidates = gridStarts(model, data, spec.fixed, 4);
   let best: { theta: number[]; lm: LmResult } | null = null;
   let starts = 0;
   for (const cand of candidates) {
     starts++;
-    const lm = levenbergMarquardt(problem, clampStart(toFree(cand.theta), lower, upper), lmOptions);
+    const lm = levenbergMarquardt(problem, clampStart(toFree(mapped, cand.theta), lower, upper), lmOptions);
     const better =
       !best ||
       (lm.converged && !best.lm.converged) ||
       (lm.converged === best.lm.converged && Number.isFinite(lm.ssr) && !(lm.ssr >= best.lm.ssr));
-    if (better) best = { theta: toTheta(lm.theta), lm };
+    if (better) best = { theta: toTheta(mapped, lm.theta), lm };
     // A converged run from the best grid point is accepted: the grid has already compared starts.
     if (best && best.lm.converged) break;
   }

@@ -115,6 +115,92 @@ function workspace(n: number, p: number): Workspace {
   return ws;
 }
 
+function sumOfSquares(r: Float64Array, n: number): number {
+  let s = 0;
+  for (let i = 0; i < n; i++) s += r[i] * r[i];
+  return Number.isFinite(s) ? s : Infinity;
+}
+
+/**
+ * Projected gradient: a parameter at a bound whose descent direction points outward is held
+ * (its row and column of the damped system become the identity). Returns the largest cosine
+ * between the residual vector and a free Jacobian column (the gradient test).
+ */
+function projectGradient(ws: Workspace, theta: number[], p: number, ssr: number, options: LmOptions): number {
+  const { A, As, g, gs, held } = ws;
+  const { lower, upper } = options;
+  let gmax = 0;
+  for (let j = 0; j < p; j++) {
+    held[j] =
+      (lower && theta[j] <= lower[j] && g[j] < 0) || (upper && theta[j] >= upper[j] && g[j] > 0) ? 1 : 0;
+    gs[j] = held[j] ? 0 : g[j];
+    const colNorm = Math.sqrt(A[j * p + j]);
+    if (!held[j] && colNorm > 0) gmax = Math.max(gmax, Math.abs(g[j]) / (colNorm * Math.sqrt(ssr)));
+  }
+  for (let j = 0; j < p; j++) {
+    for (let k = 0; k < p; k++) {
+      As[j * p + k] = held[j] || held[k] ? (j === k ? A[j * p + j] || 1 : 0) : A[j * p + k];
+    }
+  }
+  return gmax;
+}
+
+/**
+ * Trial point θ + δ clipped into the bounds (δ becomes the clipped step); returns the predicted
+ * reduction of SSR for it, 2δᵀg − δᵀAδ, and whether every component is below xtol.
+ */
+function trialStep(
+  ws: Workspace,
+  theta: number[],
+  p: number,
+  options: LmOptions,
+  xtol: number,
+): { pred: number; small: boolean } {
+  const { A, g, delta, trial } = ws;
+  for (let j = 0; j < p; j++) trial[j] = theta[j] + delta[j];
+  clampInto(trial, options.lower, options.upper);
+  let small = true;
+  for (let j = 0; j < p; j++) {
+    delta[j] = trial[j] - theta[j];
+    if (Math.abs(delta[j]) > xtol * (Math.abs(theta[j]) + xtol)) small = false;
+  }
+  let pred = 0;
+  for (let j = 0; j < p; j++) {
+    let ad = 0;
+    for (let k = 0; k < p; k++) ad += A[j * p + k] * delta[k];
+    pred += delta[j] * (2 * g[j] - ad);
+  }
+  return { pred, small };
+}
+
+function finish(
+  reason: StopReason,
+  theta: number[],
+  ssr: number,
+  iterations: number,
+  evaluations: number,
+  ws: Workspace,
+  p: number,
+  options: LmOptions,
+): LmResult {
+  const { A } = ws;
+  const { lower, upper } = options;
+  let stop = reason;
+  if (stop.startsWith('converged') && ssr > 0) {
+    // a parameter without any influence on the model (a zero Jacobian column) cannot be
+    // estimated: the problem is singular even though the damped steps converged
+    let maxA = 0;
+    for (let j = 0; j < p; j++) maxA = Math.max(maxA, A[j * p + j]);
+    for (let j = 0; j < p; j++) if (!(A[j * p + j] > 1e-28 * maxA)) stop = 'singular';
+  }
+  const atBound: (-1 | 0 | 1)[] = [];
+  for (let j = 0; j < p; j++) {
+    atBound.push(lower && theta[j] <= lower[j] ? -1 : upper && theta[j] >= upper[j] ? 1 : 0);
+  }
+  const converged = stop === 'converged-gradient' || stop === 'converged-step' || stop === 'converged-ssr';
+  return { theta, ssr, iterations, evaluations, stop, converged, atBound };
+}
+
 export function levenbergMarquardt(
   problem: LsqProblem,
   start: ArrayLike<number>,
@@ -125,121 +211,74 @@ export function levenbergMarquardt(
   const ftol = options.ftol ?? DEFAULTS.ftol;
   const xtol = options.xtol ?? DEFAULTS.xtol;
   const gtol = options.gtol ?? DEFAULTS.gtol;
-  const { lower, upper } = options;
 
   const theta = Array.from(start); // small plain arrays are cheaper to create than typed ones
-  clampInto(theta, lower, upper);
+  clampInto(theta, options.lower, options.upper);
   // Buffers are reused from call to call and used only up to n and p.
   const ws = workspace(n, p);
-  let { r, J, rT, JT } = ws;
-  const { A, As, L, s: scale, g, gs, D, delta, trial, held } = ws;
+  const { A, D, g, gs, delta, L, s: scale, As } = ws;
   let evaluations = 1;
-  const done = (reason: StopReason, ssr: number, iterations: number): LmResult => {
-    let stop = reason;
-    if (stop.startsWith('converged') && ssr > 0) {
-      // a parameter without any influence on the model (a zero Jacobian column) cannot be
-      // estimated: the problem is singular even though the damped steps converged
-      let maxA = 0;
-      for (let j = 0; j < p; j++) maxA = Math.max(maxA, A[j * p + j]);
-      for (let j = 0; j < p; j++) if (!(A[j * p + j] > 1e-28 * maxA)) stop = 'singular';
-    }
-    const atBound: (-1 | 0 | 1)[] = [];
-    for (let j = 0; j < p; j++) {
-      atBound.push(lower && theta[j] <= lower[j] ? -1 : upper && theta[j] >= upper[j] ? 1 : 0);
-    }
-    const converged = stop === 'converged-gradient' || stop === 'converged-step' || stop === 'converged-ssr';
-    return { theta, ssr, iterations, evaluations, stop, converged, atBound };
-  };
+  const stop = (reason: StopReason, ssr: number, iterations: number): LmResult =>
+    finish(reason, theta, ssr, iterations, evaluations, ws, p, options);
 
-  if (!problem.evaluate(theta, r, J)) return done('non-finite', NaN, 0);
-  let ssr = 0;
-  for (let i = 0; i < n; i++) ssr += r[i] * r[i];
-  if (!Number.isFinite(ssr)) return done('non-finite', NaN, 0);
-  normalEquations(J, r, n, p, A, g);
-
+  if (!problem.evaluate(theta, ws.r, ws.J)) return stop('non-finite', NaN, 0);
+  let ssr = sumOfSquares(ws.r, n);
+  if (!Number.isFinite(ssr)) return stop('non-finite', NaN, 0);
+  normalEquations(ws.J, ws.r, n, p, A, g);
   let maxDiag = 0;
   for (let j = 0; j < p; j++) {
     D[j] = Math.max(A[j * p + j], 1e-300);
     maxDiag = Math.max(maxDiag, A[j * p + j]);
   }
-  if (!(maxDiag > 0)) return done(ssr === 0 ? 'converged-gradient' : 'singular', ssr, 0);
+  if (!(maxDiag > 0)) return stop(ssr === 0 ? 'converged-gradient' : 'singular', ssr, 0);
   let lambda = 1e-3;
   let nu = 2;
 
   for (let it = 1; it <= maxIterations; it++) {
-    if (ssr === 0) return done('converged-gradient', ssr, it - 1);
-    // Projected gradient: a parameter at a bound whose descent direction points outward is held.
-    let gmax = 0;
-    for (let j = 0; j < p; j++) {
-      held[j] =
-        (lower && theta[j] <= lower[j] && g[j] < 0) || (upper && theta[j] >= upper[j] && g[j] > 0) ? 1 : 0;
-      gs[j] = held[j] ? 0 : g[j];
-      const colNorm = Math.sqrt(A[j * p + j]);
-      if (!held[j] && colNorm > 0) gmax = Math.max(gmax, Math.abs(g[j]) / (colNorm * Math.sqrt(ssr)));
-    }
-    for (let j = 0; j < p; j++) {
-      for (let k = 0; k < p; k++) {
-        As[j * p + k] = held[j] || held[k] ? (j === k ? A[j * p + j] || 1 : 0) : A[j * p + k];
-      }
-    }
-    if (gmax <= gtol) return done('converged-gradient', ssr, it - 1);
-
+    if (ssr === 0) return stop('converged-gradient', ssr, it - 1);
+    if (projectGradient(ws, theta, p, ssr, options) <= gtol) return stop('converged-gradient', ssr, it - 1);
     // Inner loop: raise λ until a step lowers SSR.
     for (;;) {
       if (!dampedCholeskySolve(As, D, lambda, gs, delta, p, L, scale)) {
         lambda *= nu;
         nu *= 2;
-        if (!Number.isFinite(lambda) || lambda > 1e30) return done('singular', ssr, it);
+        if (!Number.isFinite(lambda) || lambda > 1e30) return stop('singular', ssr, it);
         continue;
       }
-      for (let j = 0; j < p; j++) trial[j] = theta[j] + delta[j];
-      clampInto(trial, lower, upper);
-      let stepSmall = true;
-      let pred = 0;
-      for (let j = 0; j < p; j++) {
-        delta[j] = trial[j] - theta[j];
-        if (Math.abs(delta[j]) > xtol * (Math.abs(theta[j]) + xtol)) stepSmall = false;
-      }
-      // predicted reduction of SSR for the (possibly clipped) step: 2δᵀg − δᵀAδ
-      for (let j = 0; j < p; j++) {
-        let ad = 0;
-        for (let k = 0; k < p; k++) ad += A[j * p + k] * delta[k];
-        pred += delta[j] * (2 * g[j] - ad);
-      }
+      const { pred, small } = trialStep(ws, theta, p, options, xtol);
       evaluations++;
-      const finite = problem.evaluate(trial, rT, JT);
-      let ssrT = Infinity;
-      if (finite) {
-        ssrT = 0;
-        for (let i = 0; i < n; i++) ssrT += rT[i] * rT[i];
-        if (!Number.isFinite(ssrT)) ssrT = Infinity;
-      }
+      const ssrT = problem.evaluate(ws.trial, ws.rT, ws.JT) ? sumOfSquares(ws.rT, n) : Infinity;
       const actual = ssr - ssrT;
       const rho = pred > 0 ? actual / pred : -1;
       if (actual > 0 && rho > 0) {
-        for (let j = 0; j < p; j++) theta[j] = trial[j];
+        for (let j = 0; j < p; j++) theta[j] = ws.trial[j];
         ssr = ssrT;
-        const rOld = r;
-        r = rT;
-        rT = rOld;
-        const JOld = J;
-        J = JT;
-        JT = JOld;
-        normalEquations(J, r, n, p, A, g);
+        swapTrial(ws);
+        normalEquations(ws.J, ws.r, n, p, A, g);
         for (let j = 0; j < p; j++) D[j] = Math.max(D[j], A[j * p + j]);
         lambda *= Math.max(1 / 3, 1 - Math.pow(2 * rho - 1, 3));
         nu = 2;
-        if (actual <= ftol * ssrT && pred <= ftol * ssrT && rho <= 2) return done('converged-ssr', ssr, it);
-        if (stepSmall) return done('converged-step', ssr, it);
+        if (actual <= ftol * ssrT && pred <= ftol * ssrT && rho <= 2) return stop('converged-ssr', ssr, it);
+        if (small) return stop('converged-step', ssr, it);
         break;
       }
       // Rejected: at the precision limit the predicted gain itself is negligible.
-      if (Math.abs(actual) <= ftol * ssr && pred <= ftol * ssr) return done('converged-ssr', ssr, it);
-      if (stepSmall && pred <= 1e-12 * ssr) return done('converged-step', ssr, it);
+      if (Math.abs(actual) <= ftol * ssr && pred <= ftol * ssr) return stop('converged-ssr', ssr, it);
+      if (small && pred <= 1e-12 * ssr) return stop('converged-step', ssr, it);
       lambda *= nu;
       nu *= 2;
-      if (!Number.isFinite(lambda) || lambda > 1e30) return done('singular', ssr, it);
+      if (!Number.isFinite(lambda) || lambda > 1e30) return stop('singular', ssr, it);
     }
   }
-  return done('max-iterations', ssr, maxIterations);
+  return stop('max-iterations', ssr, maxIterations);
+}
+
+/** The accepted trial's residuals and Jacobian become the current ones (buffers trade places). */
+function swapTrial(ws: Workspace): void {
+  const r = ws.r;
+  ws.r = ws.rT;
+  ws.rT = r;
+  const J = ws.J;
+  ws.J = ws.JT;
+  ws.JT = J;
 }

@@ -64,6 +64,71 @@ function solveLevels(
   return Number.isFinite(ssr) ? ssr : Infinity;
 }
 
+/** The few best grid points, best first (a class: one shared method, optimized once). */
+class BestStarts {
+  readonly list: GridPoint[] = [];
+  constructor(private readonly keep: number) {}
+  offer(candidate: ArrayLike<number>, ssr: number): void {
+    const { list, keep } = this;
+    if (list.length >= keep && !(ssr < list[list.length - 1].ssr)) return;
+    // insertion into the short sorted list; the array copy happens only for a new best few
+    let at = list.length;
+    while (at > 0 && list[at - 1].ssr > ssr) at--;
+    list.splice(at, 0, { theta: Array.from(candidate), ssr });
+    if (list.length > keep) list.pop();
+  }
+}
+
+interface GridWalk {
+  model: PhModel;
+  data: PhData;
+  grid: number[];
+  freePKa: number[];
+  freeLevel: boolean[];
+  syy: number;
+  theta: Float64Array;
+  phi: Float64Array;
+  row: Float64Array;
+  k: Float64Array;
+  work: Float64Array;
+  best: BestStarts;
+}
+
+/** Visits every increasing tuple of grid values for the free pKa values. */
+function walk(w: GridWalk, depth: number, from: number): void {
+  if (depth < w.freePKa.length) {
+    for (let g = from; g < w.grid.length; g++) {
+      w.theta[w.freePKa[depth]] = w.grid[g];
+      walk(w, depth + 1, g + 1);
+    }
+    return;
+  }
+  const { model, data, theta, phi, row, k } = w;
+  const m = model.nLinear;
+  model.constants(theta, k);
+  let ssr: number;
+  if (m === 1 && w.freeLevel[0]) {
+    // one level in one pass: V = Sφy/Sφφ and SSR = Syy − Sφy²/Sφφ
+    let sxy = 0;
+    let sxx = 0;
+    for (let i = 0; i < data.n; i++) {
+      model.basis(k, data.h[i], data.g[i], row);
+      const wf = data.w[i] * row[0];
+      sxy += wf * data.y[i];
+      sxx += wf * row[0];
+    }
+    theta[0] = sxy / sxx;
+    ssr = sxx > 1e-300 ? Math.max(0, w.syy - (sxy * sxy) / sxx) : Infinity;
+  } else {
+    for (let i = 0; i < data.n; i++) {
+      model.basis(k, data.h[i], data.g[i], row);
+      for (let c = 0; c < m; c++) phi[i * m + c] = row[c];
+    }
+    ssr = solveLevels(data, phi, m, w.freeLevel, theta, w.work);
+  }
+  if (Number.isFinite(ssr)) w.best.offer(theta, ssr);
+}
+
 /**
  * Grid starts, best first. `fixed[j]` holds a parameter's value when it is not free.
  * Returns at most `keep` points.
@@ -78,83 +143,49 @@ export function gridStarts(
   const m = model.nLinear;
   const freePKa: number[] = [];
   for (let j = m; j < p; j++) if (fixed[j] === null) freePKa.push(j);
-  const freeLevel = Array.from({ length: m }, (_, k) => fixed[k] === null);
+  const freeLevel: boolean[] = [];
+  for (let j = 0; j < m; j++) freeLevel.push(fixed[j] === null);
   const lo = data.lo - 1;
-  const hi = data.hi + 1;
-  const step = (hi - lo) / GRID_STEPS;
+  const step = (data.hi + 1 - lo) / GRID_STEPS;
   const grid: number[] = [];
   for (let i = 0; i <= GRID_STEPS; i++) grid.push(lo + i * step);
-  const best: GridPoint[] = [];
+  const best = new BestStarts(keep);
   let syy = 0;
   for (let i = 0; i < data.n; i++) syy += data.w[i] * data.y[i] * data.y[i];
-  const offer = (candidate: ArrayLike<number>, ssr: number): void => {
-    if (best.length < keep || ssr < best[best.length - 1].ssr) {
-      // insertion into the short sorted list; the array copy happens only for a new best few
-      const entry = { theta: Array.from(candidate), ssr };
-      let at = best.length;
-      while (at > 0 && best[at - 1].ssr > ssr) at--;
-      best.splice(at, 0, entry);
-      if (best.length > keep) best.pop();
-    }
-  };
   if (model.id === 'bell' && freePKa.length === 2 && freeLevel[0]) {
-    bellGrid(data, grid, syy, offer);
-    return best;
+    bellGrid(data, grid, syy, best);
+    return best.list;
   }
-
-  const buf = scratch('grid', p + data.n * m + m + 4 + m * (m + 1));
+  const size = data.n * m;
+  const buf = scratch('grid', p + size + m + 4 + m * (m + 1));
   const theta = buf.subarray(0, p);
   for (let j = 0; j < p; j++) theta[j] = fixed[j] ?? 0;
-  const phi = buf.subarray(p, p + data.n * m);
-  const row = buf.subarray(p + data.n * m, p + data.n * m + m);
-  const k = buf.subarray(p + data.n * m + m, p + data.n * m + m + 4);
-  const work = buf.subarray(p + data.n * m + m + 4, p + data.n * m + m + 4 + m * (m + 1));
-  const visit = (depth: number, from: number): void => {
-    if (depth === freePKa.length) {
-      model.constants(theta, k);
-      let ssr: number;
-      if (m === 1 && freeLevel[0]) {
-        // one level in one pass: V = Sφy/Sφφ and SSR = Syy − Sφy²/Sφφ
-        let sxy = 0;
-        let sxx = 0;
-        for (let i = 0; i < data.n; i++) {
-          model.basis(k, data.h[i], data.g[i], row);
-          const wf = data.w[i] * row[0];
-          sxy += wf * data.y[i];
-          sxx += wf * row[0];
-        }
-        theta[0] = sxy / sxx;
-        ssr = sxx > 1e-300 ? Math.max(0, syy - (sxy * sxy) / sxx) : Infinity;
-      } else {
-        for (let i = 0; i < data.n; i++) {
-          model.basis(k, data.h[i], data.g[i], row);
-          for (let c = 0; c < m; c++) phi[i * m + c] = row[c];
-        }
-        ssr = solveLevels(data, phi, m, freeLevel, theta, work);
-      }
-      if (Number.isFinite(ssr)) offer(theta, ssr);
-      return;
-    }
-    // pKa values in increasing order; a free pKa is also kept above any fixed one before it
-    for (let g = from; g < grid.length; g++) {
-      theta[freePKa[depth]] = grid[g];
-      visit(depth + 1, g + 1);
-    }
-  };
-  visit(0, 0);
-  return best;
+  walk(
+    {
+      model,
+      data,
+      grid,
+      freePKa,
+      freeLevel,
+      syy,
+      theta,
+      phi: buf.subarray(p, p + size),
+      row: buf.subarray(p + size, p + size + m),
+      k: buf.subarray(p + size + m, p + size + m + 4),
+      work: buf.subarray(p + size + m + 4, p + size + m + 4 + m * (m + 1)),
+      best,
+    },
+    0,
+    0,
+  );
+  return best.list;
 }
 
 /**
  * The bell's grid written out by hand (the command line's hot path): the powers of ten of every
  * grid value are computed once, so a grid point costs a multiply-add and a division per point.
  */
-function bellGrid(
-  data: PhData,
-  grid: readonly number[],
-  syy: number,
-  offer: (theta: ArrayLike<number>, ssr: number) => void,
-): void {
+function bellGrid(data: PhData, grid: readonly number[], syy: number, best: BestStarts): void {
   const { n, h, g, w, y } = data;
   const up = grid.map((x) => pow10(x));
   const down = grid.map((x) => pow10(-x));
@@ -175,7 +206,7 @@ function bellGrid(
       theta[0] = sxy / sxx;
       theta[1] = grid[a];
       theta[2] = grid[b];
-      offer(theta, ssr);
+      best.offer(theta, ssr);
     }
   }
 }
