@@ -5,7 +5,7 @@
 // Seeded: the same seed gives the same intervals.
 
 import type { FitContext } from './describe';
-import { DETERMINED_MARGIN, fitSpec, type FitSpec } from './fit-core';
+import { DETERMINED_MARGIN, prepareSpec, runFrom, type FitSpec } from './fit-core';
 import type { PhModel } from './models';
 import type { PhData } from './ph-data';
 import { mulberry32, randomIndex } from './prng';
@@ -42,6 +42,7 @@ export function residualBootstrap(
   const mean = res.reduce((s, r) => s + r, 0) / nu;
   const pool = res.map((r) => (r - mean) * inflate);
   const copy: PhData = { ...data, y: Float64Array.from(data.y) };
+  const prepared = prepareSpec(model, copy, spec); // the resamples change only copy.y
   const p = model.names.length;
   const draws: BootstrapDraws = {
     params: Array.from({ length: p }, () => []),
@@ -53,9 +54,7 @@ export function residualBootstrap(
   };
   for (let b = 0; b < resamples; b++) {
     for (const i of used) copy.y[i] = fitted[i] + pool[randomIndex(random, nu)] / data.sw[i];
-    const run = fitSpec(model, copy, spec, { start: theta, maxIterations: 100 });
-    if (!run) continue;
-    const th = run.theta;
+    const th = runFrom(prepared, theta, { maxIterations: 100 }).theta;
     // a pKa that leaves the data in this resample sends the optimum to that side's infinity
     let away = 0;
     const det = determined.slice();

@@ -1,7 +1,7 @@
 // One model fitted to one profile: starts, Levenberg–Marquardt, the order of the pKa values, and
 // pKa values that run out of the data. Pure numbers; statistics and reporting live elsewhere.
 
-import { levenbergMarquardt, type LmOptions, type LmResult, type StopReason } from './lm';
+import { levenbergMarquardt, type LmOptions, type LmResult, type LsqProblem, type StopReason } from './lm';
 import type { PhModel } from './models';
 import type { PhData } from './ph-data';
 import { applyMap, FAR, modelJacobian, phProblem, type AffineMap } from './ph-problem';
@@ -136,6 +136,33 @@ function clampStart(u: number[], lower: number[], upper: number[]): number[] {
 }
 
 /** Fits one spec from the given start, or from grid starts (restarting when a run fails). */
+/** A spec made ready to fit repeatedly (the bootstrap refits the same spec a thousand times). */
+export interface PreparedSpec {
+  mapped: Mapped;
+  problem: LsqProblem;
+}
+
+export function prepareSpec(model: PhModel, data: PhData, spec: FitSpec): PreparedSpec {
+  const mapped = buildMap(model, data, spec);
+  return { mapped, problem: phProblem(model, data, mapped.map) };
+}
+
+/** One Levenberg–Marquardt run of a prepared spec from model parameters θ₀. */
+export function runFrom(
+  prepared: PreparedSpec,
+  start: ArrayLike<number>,
+  options: LmOptions,
+): { theta: number[]; lm: LmResult } {
+  const { mapped, problem } = prepared;
+  const { lower, upper } = mapped;
+  const lm = levenbergMarquardt(problem, clampStart(toFree(mapped, start), lower, upper), {
+    ...options,
+    lower,
+    upper,
+  });
+  return { theta: toTheta(mapped, lm.theta), lm };
+}
+
 export function fitSpec(
   model: PhModel,
   data: PhData,
@@ -146,14 +173,7 @@ export function fitSpec(
   const { lower, upper } = mapped;
   const problem = phProblem(model, data, mapped.map);
   const lmOptions: LmOptions = { ...options, lower, upper };
-  if (options.start) {
-    const lm = levenbergMarquardt(
-      problem,
-      clampStart(toFree(mapped, options.start), lower, upper),
-      lmOptions,
-    );
-    return { theta: toTheta(mapped, lm.theta), lm, starts: 1 };
-  }
+  if (options.start) return { ...runFrom({ mapped, problem }, options.start, options), starts: 1 };
   const candidates = gridStarts(model, data, spec.fixed, 4);
   let best: { theta: number[]; lm: LmResult } | null = null;
   let starts = 0;
