@@ -53,6 +53,13 @@ export const router = createBrowserRouter([
             children: [
               { index: true, lazy: load(() => import('./routes/studies/overview')) },
               { path: 'buffers', lazy: load(() => import('./routes/studies/buffers')) },
+              // Plates (issue 5): the list, one plate (map editor and reads), the import of reader files.
+              { path: 'plates', lazy: load(() => import('./routes/studies/plates')) },
+              { path: 'plates/:plateId', lazy: load(() => import('./routes/studies/plates-detail')) },
+              { path: 'plates/:plateId/import', lazy: load(() => import('./routes/studies/plates-import')) },
+              // Analysis and review (issue 6).
+              { path: 'analysis', lazy: load(() => import('./routes/studies/analysis')) },
+              { path: 'review', lazy: load(() => import('./routes/studies/review')) },
             ],
           },
           { path: rel(paths.enzymes.path), lazy: load(() => import('./routes/enzymes/list')) },

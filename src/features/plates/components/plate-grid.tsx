@@ -1,12 +1,15 @@
-// The plate as one SVG grid (rows A–H or A–P × columns 1–12 or 1–24). Pointer events are handled
-// once on the SVG (the well under the pointer is computed from its position), never per well,
-// and each well is a memoised cell, so painting 384 wells stays cheap. Keyboard focus stays on the
-// SVG, with aria-activedescendant naming the well at the cursor.
-import { useId, useRef, useState, type KeyboardEvent, type ClipboardEvent } from 'react';
+// The plate as a grid (rows A–H or A–P × columns 1–12 or 1–24). The wells are drawn on one
+// canvas (utils/draw-plate.ts) so that painting 384 wells stays well under a frame budget; over it
+// lies a layer of empty, memoised cells that carry the grid's meaning for assistive technology
+// (role, name, selected) and receive the pointer. Pointer events are handled once, on the grid,
+// from their position; the keyboard stays on the grid, with aria-activedescendant naming the
+// well at the cursor. Copy, cut and paste are the browser's own events while the grid has focus.
+import { memo, useEffect, useId, useLayoutEffect, useRef, useState, type KeyboardEvent } from 'react';
 import { plateDimensions, type PlateFormat } from '@shared/plate/geometry';
-import type { PlateMap } from '@shared/plate-map/schema';
-import { cellName, rowLetter, type Cell } from '../utils/grid';
-import { describeWell, WellCell } from './well-cell';
+import type { PlateMap, WellAssignment } from '@shared/plate-map/schema';
+import { clearWellSprites, drawPlate, type GridGeometry } from '../utils/draw-plate';
+import { cellName, type Cell } from '../utils/grid';
+import { wellRoleLabels } from '../utils/roles';
 
 export type GridHit =
   | { kind: 'cell'; cell: Cell }
@@ -26,13 +29,13 @@ export type PlateGridProps = {
   onPointerStart: (hit: GridHit, extend: boolean) => void;
   onPointerDrag: (cell: Cell) => void;
   onPointerEnd: () => void;
-  onKeyDown: (event: KeyboardEvent<SVGSVGElement>) => void;
-  onCopy?: (event: ClipboardEvent<SVGSVGElement>) => void;
-  onCut?: (event: ClipboardEvent<SVGSVGElement>) => void;
-  onPaste?: (event: ClipboardEvent<SVGSVGElement>) => void;
+  onKeyDown: (event: KeyboardEvent<HTMLDivElement>) => void;
+  onCopy?: (event: ClipboardEvent) => void;
+  onCut?: (event: ClipboardEvent) => void;
+  onPaste?: (event: ClipboardEvent) => void;
 };
 
-export const gridGeometry = (format: PlateFormat) => {
+export const gridGeometry = (format: PlateFormat): GridGeometry => {
   const { rows, columns } = plateDimensions(format);
   const compact = format === 384;
   const cw = compact ? 27 : 54;
@@ -52,20 +55,99 @@ export const gridGeometry = (format: PlateFormat) => {
   };
 };
 
+export function describeWell(
+  name: string,
+  well: WellAssignment | undefined,
+  variantName: string | null,
+): string {
+  if (!well) return `${name}, no role`;
+  const parts = [name, wellRoleLabels[well.role]];
+  if (variantName) parts.push(variantName);
+  if (well.pH != null) parts.push(`pH ${well.pH}`);
+  if (well.buffer) parts.push(well.buffer);
+  if (well.replicate != null) parts.push(`replicate ${well.replicate}`);
+  if (well.concentrationUm != null) parts.push(`${well.concentrationUm} µM`);
+  return parts.join(', ');
+}
+
+type CellTargetProps = {
+  id: string;
+  name: string;
+  label: string;
+  selected: boolean;
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+};
+
+/** An empty box over a drawn well: its name and state for screen readers and tests. */
+const CellTarget = memo(function CellTarget({ id, name, label, selected, x, y, w, h }: CellTargetProps) {
+  return (
+    <div
+      role="gridcell"
+      id={id}
+      data-well={name}
+      aria-label={label}
+      aria-selected={selected}
+      style={{ position: 'absolute', left: x, top: y, width: w, height: h }}
+    />
+  );
+});
+
 export function PlateGrid(props: PlateGridProps) {
-  const { format, map, selected, cursor, highlighted, tags, variantNames } = props;
+  const { format, map, selected, cursor, highlighted, tags, variantNames, onCopy, onCut, onPaste } = props;
   const g = gridGeometry(format);
   const idBase = useId();
-  const svgRef = useRef<SVGSVGElement>(null);
+  const gridRef = useRef<HTMLDivElement>(null);
+  const canvasRef = useRef<HTMLCanvasElement>(null);
   const dragging = useRef<string | null>(null);
   const [hover, setHover] = useState<string | null>(null);
+  const [focused, setFocused] = useState(false);
+  const [scale] = useState(() => Math.max(1, Math.min(3, window.devicePixelRatio || 1)));
   const wellId = (name: string) => `${idBase}-${name}`;
 
+  const [, setFontsReady] = useState(false);
+  useEffect(() => {
+    let live = true;
+    void document.fonts?.ready.then(() => {
+      if (!live) return;
+      clearWellSprites();
+      setFontsReady(true);
+    });
+    return () => {
+      live = false;
+    };
+  }, []);
+
+  useLayoutEffect(() => {
+    const ctx = canvasRef.current?.getContext('2d');
+    if (ctx) drawPlate(ctx, g, { map, selected, highlighted, cursor, tags, focused }, scale);
+  });
+
+  // Clipboard events go to the document (the grid is not editable); act while the grid has focus.
+  const clipboard = useRef({ onCopy, onCut, onPaste });
+  clipboard.current = { onCopy, onCut, onPaste };
+  useEffect(() => {
+    const mine = (kind: 'onCopy' | 'onCut' | 'onPaste') => (e: ClipboardEvent) => {
+      if (document.activeElement === gridRef.current) clipboard.current[kind]?.(e);
+    };
+    const listeners = [
+      ['copy', mine('onCopy')],
+      ['cut', mine('onCut')],
+      ['paste', mine('onPaste')],
+    ] as const;
+    for (const [type, listener] of listeners) document.addEventListener(type, listener);
+    return () => {
+      for (const [type, listener] of listeners) document.removeEventListener(type, listener);
+    };
+  }, []);
+
   const hitAt = (clientX: number, clientY: number): GridHit | null => {
-    const box = svgRef.current?.getBoundingClientRect();
+    const box = gridRef.current?.getBoundingClientRect();
     if (!box) return null;
-    const x = ((clientX - box.left) * g.width) / box.width;
-    const y = ((clientY - box.top) * g.height) / box.height;
+    const x = clientX - box.left;
+    const y = clientY - box.top;
     const column = Math.floor((x - g.left) / g.cw);
     const row = Math.floor((y - g.top) / g.ch);
     const inColumns = column >= 0 && column < g.columns;
@@ -76,53 +158,41 @@ export function PlateGrid(props: PlateGridProps) {
     return inRows && inColumns ? { kind: 'cell', cell: { row, column } } : null;
   };
 
-  const cells = [];
+  const rows = [];
   for (let row = 0; row < g.rows; row++) {
-    const rowCells = [];
+    const cells = [];
     for (let column = 0; column < g.columns; column++) {
       const name = cellName({ row, column });
       const well = map.wells[name];
-      const variantId = well?.variantId ?? null;
-      rowCells.push(
-        <WellCell
+      const variantName = well?.variantId
+        ? (variantNames[well.variantId] ?? 'a variant not in this study')
+        : null;
+      cells.push(
+        <CellTarget
           key={name}
           id={wellId(name)}
           name={name}
+          label={describeWell(name, well, variantName)}
+          selected={selected.has(name)}
           x={g.left + column * g.cw}
           y={g.top + row * g.ch}
           w={g.cw}
           h={g.ch}
-          well={well}
-          tag={variantId ? (tags[variantId] ?? '?') : null}
-          variantName={variantId ? (variantNames[variantId] ?? 'unknown variant') : null}
-          selected={selected.has(name)}
-          cursor={row === cursor.row && column === cursor.column}
-          highlighted={highlighted.has(name)}
-          compact={g.compact}
         />,
       );
     }
-    cells.push(
-      <g role="row" key={row}>
-        <text
-          role="rowheader"
-          x={g.left - 7}
-          y={g.top + row * g.ch + g.ch / 2 + 4}
-          textAnchor="end"
-          fontSize={11}
-          fill="#4f5a5c"
-        >
-          {rowLetter(row)}
-        </text>
-        {rowCells}
-      </g>,
+    rows.push(
+      <div role="row" key={row} className="contents">
+        {cells}
+      </div>,
     );
   }
 
+  const hovered = hover ? map.wells[hover] : undefined;
   return (
     <div>
-      <svg
-        ref={svgRef}
+      <div
+        ref={gridRef}
         role="grid"
         aria-label={props.label}
         aria-multiselectable="true"
@@ -130,21 +200,19 @@ export function PlateGrid(props: PlateGridProps) {
         aria-colcount={g.columns}
         aria-activedescendant={wellId(cellName(cursor))}
         tabIndex={0}
-        width={g.width}
-        height={g.height}
-        viewBox={`0 0 ${g.width} ${g.height}`}
-        className="block max-w-full cursor-cell touch-none select-none rounded outline-offset-4"
+        className="relative cursor-cell touch-none rounded outline-offset-4 select-none"
+        // A fixed-size box: style and layout changes inside it never reach the rest of the page.
+        style={{ width: g.width, height: g.height, contain: 'strict' }}
         onKeyDown={props.onKeyDown}
-        onCopy={props.onCopy}
-        onCut={props.onCut}
-        onPaste={props.onPaste}
+        onFocus={() => setFocused(true)}
+        onBlur={() => setFocused(false)}
         onPointerDown={(e) => {
           if (e.button !== 0) return;
           const hit = hitAt(e.clientX, e.clientY);
           if (!hit) return;
           e.currentTarget.focus();
           e.currentTarget.setPointerCapture(e.pointerId);
-          dragging.current = hit.kind === 'cell' ? cellName(hit.cell) : null;
+          dragging.current = hit.kind === 'cell' ? cellName(hit.cell) : '';
           props.onPointerStart(hit, e.shiftKey);
           e.preventDefault();
         }}
@@ -152,9 +220,9 @@ export function PlateGrid(props: PlateGridProps) {
           const hit = hitAt(e.clientX, e.clientY);
           const name = hit?.kind === 'cell' ? cellName(hit.cell) : null;
           if (name !== hover) setHover(name);
-          if (dragging.current && hit?.kind === 'cell' && name !== dragging.current) {
+          if (dragging.current && name && name !== dragging.current) {
             dragging.current = name;
-            props.onPointerDrag(hit.cell);
+            props.onPointerDrag((hit as { cell: Cell }).cell);
           }
         }}
         onPointerUp={() => {
@@ -164,37 +232,23 @@ export function PlateGrid(props: PlateGridProps) {
         }}
         onPointerLeave={() => setHover(null)}
       >
-        <rect
-          x={g.left}
-          y={g.top}
-          width={g.columns * g.cw}
-          height={g.rows * g.ch}
-          fill="#fbfcfb"
-          stroke="#d8ddda"
+        <canvas
+          ref={canvasRef}
+          aria-hidden="true"
+          width={Math.round(g.width * scale)}
+          height={Math.round(g.height * scale)}
+          className="absolute inset-0"
+          // Its own layer: redrawing the wells repaints nothing else.
+          style={{ width: g.width, height: g.height, willChange: 'transform' }}
         />
-        <g role="row">
-          {Array.from({ length: g.columns }, (_, column) => (
-            <text
-              key={column}
-              role="columnheader"
-              x={g.left + column * g.cw + g.cw / 2}
-              y={g.top - 5}
-              textAnchor="middle"
-              fontSize={g.compact ? 9.5 : 11}
-              fill="#4f5a5c"
-            >
-              {column + 1}
-            </text>
-          ))}
-        </g>
-        {cells}
-      </svg>
+        {rows}
+      </div>
       <p className="mt-1 h-5 truncate text-sm text-ink-muted" aria-hidden="true">
         {hover
           ? describeWell(
               hover,
-              map.wells[hover],
-              (map.wells[hover]?.variantId && variantNames[map.wells[hover].variantId!]) || null,
+              hovered,
+              hovered?.variantId ? (variantNames[hovered.variantId] ?? null) : null,
             )
           : 'Drag to select a rectangle; click a row letter or column number to select it whole.'}
       </p>

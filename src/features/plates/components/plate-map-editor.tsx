@@ -2,7 +2,7 @@
 // The working copy lives here (with undo); Save sends it with the version it started from, and a
 // 409 offers to reload. Read-only for viewers and while the study is in review or approved.
 import { useQueryClient } from '@tanstack/react-query';
-import { useCallback, useMemo, useRef, useState, type ClipboardEvent } from 'react';
+import { useCallback, useMemo, useRef, useState } from 'react';
 import { checkPlateMap, type MapCheck } from '@shared/plate-map/checks';
 import type { PlateMap } from '@shared/plate-map/schema';
 import type { PlateDetail } from '@shared/schemas/plates-types';
@@ -199,19 +199,19 @@ export function PlateMapEditor({ plate, context, canWrite }: PlateMapEditorProps
     if (result.leftOut)
       toast.show(`${result.leftOut} copied well(s) fell off the plate and were left out.`, 'warning');
   };
-  const onCopy = (e: ClipboardEvent<SVGSVGElement>) => {
+  const onCopy = (e: ClipboardEvent) => {
     const clip = copySelection();
     if (!clip) return;
-    e.clipboardData.setData('text/plain', clipText(clip));
+    e.clipboardData?.setData('text/plain', clipText(clip));
     e.preventDefault();
   };
-  const onCut = (e: ClipboardEvent<SVGSVGElement>) => {
+  const onCut = (e: ClipboardEvent) => {
     onCopy(e);
     clear();
   };
-  const onPaste = (e: ClipboardEvent<SVGSVGElement>) => {
+  const onPaste = (e: ClipboardEvent) => {
     e.preventDefault();
-    pasteFrom(parseClip(e.clipboardData.getData('text/plain')) ?? lastClip);
+    pasteFrom(parseClip(e.clipboardData?.getData('text/plain') ?? '') ?? lastClip);
   };
   const copyButton = () => {
     const clip = copySelection();

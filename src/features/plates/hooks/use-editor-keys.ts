@@ -31,7 +31,7 @@ const arrows: Record<string, [number, number]> = {
 export function useEditorKeys(actions: EditorKeyActions) {
   const [typed, setTyped] = useState<string | null>(null);
 
-  const onKeyDown = (e: KeyboardEvent<SVGSVGElement>) => {
+  const onKeyDown = (e: KeyboardEvent<HTMLDivElement>) => {
     const mod = e.ctrlKey || e.metaKey;
     const key = e.key;
     const handled = () => e.preventDefault();
