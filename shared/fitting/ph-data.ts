@@ -115,7 +115,7 @@ export function prepareProfile(input: ProfileInput, minPoints: number): Result<P
 }
 
 function countDistinct(data: PhData): number {
-  const seen: number[] = [];
-  for (let i = 0; i < data.n; i++) if (data.w[i] > 0 && !seen.includes(data.pH[i])) seen.push(data.pH[i]);
-  return seen.length;
+  const seen = new Set<number>();
+  for (let i = 0; i < data.n; i++) if (data.w[i] > 0) seen.add(data.pH[i]);
+  return seen.size;
 }

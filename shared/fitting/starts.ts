@@ -7,7 +7,6 @@
 import type { PhModel } from './models';
 import type { PhData } from './ph-data';
 import { pow10 } from './models/types';
-import { scratch } from './scratch';
 
 export interface GridPoint {
   theta: number[];
@@ -157,7 +156,7 @@ export function gridStarts(
     return best.list;
   }
   const size = data.n * m;
-  const buf = scratch('grid', p + size + m + 4 + m * (m + 1));
+  const buf = new Float64Array(p + size + m + 4 + m * (m + 1));
   const theta = buf.subarray(0, p);
   for (let j = 0; j < p; j++) theta[j] = fixed[j] ?? 0;
   walk(

@@ -43,13 +43,6 @@ export function estimate(value: number | null, se: number | null, dof: number): 
   return { value: v, se: s, ci95: Number.isFinite(a) && Number.isFinite(b) ? [a, b] : null };
 }
 
-/** gᵀ·C·g for a gradient over the q free parameters. */
-export function quadraticForm(g: ArrayLike<number>, C: ArrayLike<number>, q: number): number {
-  let s = 0;
-  for (let a = 0; a < q; a++) for (let b = 0; b < q; b++) s += g[a] * C[a * q + b] * g[b];
-  return s;
-}
-
 /** gᵀ·C·g where g is indexed by model parameter and C by the free parameters `free`. */
 export function quadraticFormOver(
   g: ArrayLike<number>,
@@ -60,33 +53,4 @@ export function quadraticFormOver(
   let s = 0;
   for (let a = 0; a < q; a++) for (let b = 0; b < q; b++) s += g[free[a]] * C[a * q + b] * g[free[b]];
   return s;
-}
-
-/**
- * Delta-method standard error of fn(θ), with ∇fn by central differences over the free
- * parameters (step ∛ε·max(|θ|, 1)). Null when fn is undefined near θ.
- */
-export function deltaSE(
-  fn: (theta: Float64Array) => number | null,
-  theta: ArrayLike<number>,
-  free: readonly number[],
-  cov: ArrayLike<number> | null,
-): number | null {
-  if (!cov) return null;
-  const q = free.length;
-  const g = new Float64Array(q);
-  const t = Float64Array.from(theta);
-  for (let a = 0; a < q; a++) {
-    const j = free[a];
-    const h = 6e-6 * Math.max(Math.abs(theta[j]), 1);
-    t[j] = theta[j] + h;
-    const up = fn(t);
-    t[j] = theta[j] - h;
-    const down = fn(t);
-    t[j] = theta[j];
-    if (up === null || down === null || !Number.isFinite(up) || !Number.isFinite(down)) return null;
-    g[a] = (up - down) / (2 * h);
-  }
-  const v = quadraticForm(g, cov, q);
-  return v >= 0 && Number.isFinite(v) ? Math.sqrt(v) : null;
 }
