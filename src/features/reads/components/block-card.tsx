@@ -80,31 +80,39 @@ export function BlockCard({ block: b, plateFormat, choice, onChange }: BlockCard
           format={b.plateFormat}
           values={b.preview}
           flags={b.flags}
-          cell={b.plateFormat === 384 ? 8 : 15}
+          cell={b.plateFormat === 384 ? 10 : 15}
           label={`Heat map of block ${b.index + 1}${b.kind === 'kinetic' ? ' (last value of each well)' : ''}`}
           legendTitle={b.kind === 'kinetic' ? 'Last value' : 'Value'}
         />
       </div>
       {choice.include && (
         <div className="mt-3 grid grid-cols-[1fr_8rem_auto] items-end gap-3 border-t border-line pt-2">
-          <label className="block">
-            <span className="mb-0.5 block text-sm text-ink-muted">Read label</span>
-            <input
-              className={input}
-              value={choice.label}
-              maxLength={200}
-              onChange={(e) => onChange({ ...choice, label: e.target.value })}
-            />
-          </label>
-          <label className="block">
-            <span className="mb-0.5 block text-sm text-ink-muted">Wavelength (nm)</span>
-            <input
-              className={`${input} text-right`}
-              inputMode="numeric"
-              value={choice.wavelength}
-              onChange={(e) => onChange({ ...choice, wavelength: e.target.value })}
-            />
-          </label>
+          {choice.asSeries ? (
+            <p className="col-span-2 mb-1.5 text-sm text-ink-muted">
+              One read of a time course: the label and wavelength are set below, with the times.
+            </p>
+          ) : (
+            <>
+              <label className="block">
+                <span className="mb-0.5 block text-sm text-ink-muted">Read label</span>
+                <input
+                  className={input}
+                  value={choice.label}
+                  maxLength={200}
+                  onChange={(e) => onChange({ ...choice, label: e.target.value })}
+                />
+              </label>
+              <label className="block">
+                <span className="mb-0.5 block text-sm text-ink-muted">Wavelength (nm)</span>
+                <input
+                  className={`${input} text-right`}
+                  inputMode="numeric"
+                  value={choice.wavelength}
+                  onChange={(e) => onChange({ ...choice, wavelength: e.target.value })}
+                />
+              </label>
+            </>
+          )}
           {b.kind === 'endpoint' ? (
             <label className="mb-1.5 flex items-center gap-1.5 text-sm">
               <input
