@@ -1,25 +1,23 @@
 // The plate map editor: brush and tools, the grid, the inspector, live checks and the legend.
 // The working copy lives here (with undo); Save sends it with the version it started from, and a
 // 409 offers to reload. Read-only for viewers and while the study is in review or approved.
-import { useQueryClient } from '@tanstack/react-query';
-import { useCallback, useMemo, useRef, useState } from 'react';
+import { useCallback, useMemo, useState } from 'react';
 import { checkPlateMap, type MapCheck } from '@shared/plate-map/checks';
 import type { PlateMap } from '@shared/plate-map/schema';
 import type { PlateDetail } from '@shared/schemas/plates-types';
 import { useToast } from '@/components/ui/toast';
-import { ApiError } from '@/lib/api-client';
-import { getPlateQueryOptions } from '../api/get-plate';
 import type { PlateStudyContext } from '../api/get-study-context';
-import { useSavePlateMap } from '../api/save-plate-map';
 import { useEditorKeys } from '../hooks/use-editor-keys';
+import { useGridPointer } from '../hooks/use-grid-pointer';
+import { useMapClipboard } from '../hooks/use-map-clipboard';
 import { useMapHistory } from '../hooks/use-map-history';
+import { useMapSave } from '../hooks/use-map-save';
 import { useSelection } from '../hooks/use-selection';
 import { useUnsavedGuard } from '../hooks/use-unsaved-guard';
 import { brushPatch, defaultBrush, type Brush } from '../utils/brush';
-import { clipText, copyWells, copyWholeMap, parseClip, pasteClip, type Clip } from '../utils/clipboard';
 import { clearWells, patchWells, type WellPatch } from '../utils/edit-map';
 import { fillSeries, type FillSeriesInput } from '../utils/fill-series';
-import { boundsOf, rectNames, type Cell } from '../utils/grid';
+import { boundsOf } from '../utils/grid';
 import { replicatePattern, type PatternInput } from '../utils/replicate-pattern';
 import { describeTyped, readTyped } from '../utils/typed-value';
 import { variantTags } from '../utils/variant-tags';
@@ -28,32 +26,26 @@ import { EditorDialogs, type DialogName } from './editor-dialogs';
 import { EditorToolbar } from './editor-toolbar';
 import { MapChecks } from './map-checks';
 import { MapLegend } from './map-legend';
-import { PlateGrid, type GridHit } from './plate-grid';
+import { PlateGrid } from './plate-grid';
 import { ReadOnlyNotice } from './read-only-notice';
 import { WellInspector } from './well-inspector';
 
 export type PlateMapEditorProps = { plate: PlateDetail; context: PlateStudyContext; canWrite: boolean };
 
-/** Kept across plates in this tab, for pastes when the system clipboard is not readable. */
-let lastClip: Clip | null = null;
+const emptySet: ReadonlySet<string> = new Set();
 
 export function PlateMapEditor({ plate, context, canWrite }: PlateMapEditorProps) {
   const format = plate.format;
   const toast = useToast();
-  const queryClient = useQueryClient();
   const history = useMapHistory(plate.map, plate.version);
   const selection = useSelection(format);
   const [brush, setBrush] = useState<Brush>(defaultBrush);
   const [tool, setTool] = useState<Tool>('select');
   const [highlight, setHighlight] = useState<{ key: string; wells: Set<string> } | null>(null);
   const [dialog, setDialog] = useState<DialogName | null>(null);
-  const [stale, setStale] = useState<string | null>(null);
   const [typedError, setTypedError] = useState<string | null>(null);
-  const pending = useRef<string[] | null>(null);
-  const dragAnchor = useRef<Cell | null>(null);
 
-  const locked = context.status === 'in_review' || context.status === 'approved';
-  const readOnly = !canWrite || locked;
+  const readOnly = !canWrite || context.status === 'in_review' || context.status === 'approved';
   const { map } = history;
   const names = selection.names;
 
@@ -74,8 +66,7 @@ export function PlateMapEditor({ plate, context, canWrite }: PlateMapEditorProps
 
   const edit = useCallback(
     (next: PlateMap) => {
-      if (readOnly) return;
-      history.edit(next);
+      if (!readOnly) history.edit(next);
     },
     [readOnly, history],
   );
@@ -83,81 +74,21 @@ export function PlateMapEditor({ plate, context, canWrite }: PlateMapEditorProps
   const applyBrush = (wells: string[] = names) => patch(brushPatch(brush), wells);
   const clear = () => edit(clearWells(map, names));
 
-  const save = useSavePlateMap();
-  const doSave = () => {
-    if (readOnly || !history.dirty || save.isPending) return;
-    const sent = map;
-    save.mutate(
-      { plateId: plate.id, version: history.version, map: sent },
-      {
-        onSuccess: (saved) => {
-          history.markSaved(sent, saved.version);
-          toast.show(`Map saved (version ${saved.version}).`);
-        },
-        onError: (error) => {
-          if (error instanceof ApiError && error.code === 'stale_version') setStale(error.message);
-          else toast.show(`The map was not saved: ${error.message}`, 'error');
-        },
-      },
-    );
-  };
-  const guard = useUnsavedGuard(history.dirty && !save.isPending);
-
-  const reload = async (keepCopy: boolean) => {
-    if (keepCopy) {
-      const text = clipText(copyWholeMap(map, format));
-      lastClip = copyWholeMap(map, format);
-      await navigator.clipboard?.writeText(text).catch(() => undefined);
-    }
-    const fresh = await queryClient.fetchQuery({ ...getPlateQueryOptions(plate.id), staleTime: 0 });
-    history.load(fresh.map, fresh.version);
-    setStale(null);
-    toast.show(
-      keepCopy
-        ? `Reloaded version ${fresh.version}. Your version is in the clipboard: Ctrl+V (⌘V) on the map puts it back.`
-        : `Reloaded version ${fresh.version}.`,
-    );
-  };
-
-  // Pointer: a press starts a selection (a cell, a whole row or column, or all); dragging grows
-  // the rectangle; with the Paint tool, releasing paints what was selected.
-  const onPointerStart = (hit: GridHit, extend: boolean) => {
-    setHighlight(null);
-    if (hit.kind === 'cell') {
-      const anchor = extend ? selection.anchor : hit.cell;
-      dragAnchor.current = anchor;
-      if (extend) selection.extendTo(hit.cell);
-      else selection.selectRect(hit.cell, hit.cell);
-      pending.current = rectNames(anchor, hit.cell);
-    } else {
-      const last = { row: format === 96 ? 7 : 15, column: format === 96 ? 11 : 23 };
-      const [a, b] =
-        hit.kind === 'row'
-          ? [
-              { row: hit.row, column: 0 },
-              { row: hit.row, column: last.column },
-            ]
-          : hit.kind === 'column'
-            ? [
-                { row: 0, column: hit.column },
-                { row: last.row, column: hit.column },
-              ]
-            : [{ row: 0, column: 0 }, last];
-      selection.selectRect(a, b);
-      dragAnchor.current = null;
-      pending.current = rectNames(a, b);
-    }
-  };
-  const onPointerDrag = (cell: Cell) => {
-    if (!dragAnchor.current) return;
-    selection.extendTo(cell);
-    pending.current = rectNames(dragAnchor.current, cell);
-  };
-  const onPointerEnd = () => {
-    if (tool === 'paint' && pending.current && !readOnly) applyBrush(pending.current);
-    pending.current = null;
-    dragAnchor.current = null;
-  };
+  const saving = useMapSave(plate.id, format, history, readOnly);
+  const guard = useUnsavedGuard(history.dirty && !saving.saving);
+  const pointer = useGridPointer(format, selection, (wells) => {
+    if (tool === 'paint' && !readOnly) applyBrush(wells);
+  });
+  const clipboard = useMapClipboard({
+    format,
+    map,
+    names,
+    cursor: selection.cursor,
+    readOnly,
+    edit,
+    clear,
+    select: selection.selectNames,
+  });
 
   const keys = useEditorKeys({
     readOnly,
@@ -177,51 +108,12 @@ export function PlateMapEditor({ plate, context, canWrite }: PlateMapEditorProps
     undo: history.undo,
     redo: history.redo,
     selectAll: selection.selectAll,
-    save: doSave,
+    save: saving.save,
     escape: () => {
       setHighlight(null);
       selection.selectRect(selection.cursor, selection.cursor);
     },
   });
-
-  const topLeft = (): Cell => boundsOf(names, format)?.top ?? selection.cursor;
-  const copySelection = (): Clip | null => {
-    const clip = copyWells(map, names, format);
-    if (clip) lastClip = clip;
-    return clip;
-  };
-  const pasteFrom = (clip: Clip | null) => {
-    if (readOnly) return;
-    if (!clip) return toast.show('Nothing to paste: copy wells of a Bellwether plate map first.', 'warning');
-    const result = pasteClip(map, clip, topLeft(), format);
-    edit(result.map);
-    if (result.wells.length) selection.selectNames(result.wells);
-    if (result.leftOut)
-      toast.show(`${result.leftOut} copied well(s) fell off the plate and were left out.`, 'warning');
-  };
-  const onCopy = (e: ClipboardEvent) => {
-    const clip = copySelection();
-    if (!clip) return;
-    e.clipboardData?.setData('text/plain', clipText(clip));
-    e.preventDefault();
-  };
-  const onCut = (e: ClipboardEvent) => {
-    onCopy(e);
-    clear();
-  };
-  const onPaste = (e: ClipboardEvent) => {
-    e.preventDefault();
-    pasteFrom(parseClip(e.clipboardData?.getData('text/plain') ?? '') ?? lastClip);
-  };
-  const copyButton = () => {
-    const clip = copySelection();
-    if (clip) void navigator.clipboard?.writeText(clipText(clip)).catch(() => undefined);
-    toast.show(`Copied ${names.length} well(s).`);
-  };
-  const pasteButton = async () => {
-    const text = await navigator.clipboard?.readText().catch(() => '');
-    pasteFrom((text && parseClip(text)) || lastClip);
-  };
 
   const onFill = (input: FillSeriesInput) => {
     const result = fillSeries(map, format, input);
@@ -267,20 +159,20 @@ export function PlateMapEditor({ plate, context, canWrite }: PlateMapEditorProps
             canUndo={history.canUndo}
             canRedo={history.canRedo}
             dirty={history.dirty}
-            saving={save.isPending}
+            saving={saving.saving}
             version={history.version}
             replicatesRequired={map.replicatesRequired}
             onUndo={history.undo}
             onRedo={history.redo}
-            onCopy={copyButton}
-            onPaste={() => void pasteButton()}
+            onCopy={clipboard.copyButton}
+            onPaste={() => void clipboard.pasteButton()}
             onClear={clear}
             onFill={() => setDialog('fill')}
             onPattern={() => setDialog('pattern')}
             onApplyTemplate={() => setDialog('apply-template')}
             onSaveTemplate={() => setDialog('save-template')}
             onReplicatesRequired={(n) => edit({ ...map, replicatesRequired: n })}
-            onSave={doSave}
+            onSave={saving.save}
           />
         </>
       )}
@@ -295,13 +187,16 @@ export function PlateMapEditor({ plate, context, canWrite }: PlateMapEditorProps
             tags={tags}
             variantNames={variantNames}
             label={`Plate map of ${plate.name}`}
-            onPointerStart={onPointerStart}
-            onPointerDrag={onPointerDrag}
-            onPointerEnd={onPointerEnd}
+            onPointerStart={(hit, extend) => {
+              setHighlight(null);
+              pointer.onPointerStart(hit, extend);
+            }}
+            onPointerDrag={pointer.onPointerDrag}
+            onPointerEnd={pointer.onPointerEnd}
             onKeyDown={keys.onKeyDown}
-            onCopy={onCopy}
-            onCut={readOnly ? undefined : onCut}
-            onPaste={readOnly ? undefined : onPaste}
+            onCopy={clipboard.onCopy}
+            onCut={readOnly ? undefined : clipboard.onCut}
+            onPaste={readOnly ? undefined : clipboard.onPaste}
           />
           <p role="status" className={`h-5 text-sm ${typedError ? 'text-danger-600' : 'text-ink'}`}>
             {typedError ??
@@ -344,13 +239,11 @@ export function PlateMapEditor({ plate, context, canWrite }: PlateMapEditorProps
           edit({ ...m });
           toast.show(`Template “${name}” applied. Undo brings the previous map back.`);
         }}
-        stale={stale}
-        onReload={(keep) => void reload(keep)}
-        onKeepEditing={() => setStale(null)}
+        stale={saving.stale}
+        onReload={(keep) => void saving.reload(keep)}
+        onKeepEditing={saving.keepEditing}
         guard={guard}
       />
     </div>
   );
 }
-
-const emptySet: ReadonlySet<string> = new Set();

@@ -93,3 +93,10 @@ export function pasteClip(map: PlateMap, clip: Clip, at: Cell, format: PlateForm
   for (const { dr, dc, well } of clip.cells) put({ row: at.row + dr, column: at.column + dc }, well);
   return { map: { ...map, wells }, wells: placed, leftOut };
 }
+
+/** The last copy in this tab, for pastes when the system clipboard cannot be read. */
+let remembered: Clip | null = null;
+export const rememberClip = (clip: Clip) => {
+  remembered = clip;
+};
+export const rememberedClip = () => remembered;
