@@ -77,6 +77,16 @@ export const paths = {
     href: (studyId: string, plateId: string) =>
       `/studies/${encodeURIComponent(studyId)}/plates/${encodeURIComponent(plateId)}/import`,
   },
+  // Analysis and review of a study (issue 6); the analysis tab keeps its view in the query string.
+  studyAnalysis: {
+    path: '/studies/:studyId/analysis',
+    href: (studyId: string, view?: 'profiles' | 'wells' | 'exclusions' | 'qc' | 'settings') =>
+      `/studies/${encodeURIComponent(studyId)}/analysis${view ? `?view=${view}` : ''}`,
+  },
+  studyReview: {
+    path: '/studies/:studyId/review',
+    href: (studyId: string) => `/studies/${encodeURIComponent(studyId)}/review`,
+  },
   buffers: { path: '/buffers', href: () => '/buffers' },
   bufferNew: { path: '/buffers/new', href: () => '/buffers/new' },
   buffer: { path: '/buffers/:bufferId', href: (id: string) => `/buffers/${encodeURIComponent(id)}` },

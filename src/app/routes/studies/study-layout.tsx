@@ -4,6 +4,7 @@ import { Link, NavLink, Outlet, useParams, type LoaderFunctionArgs } from 'react
 import { QueryError } from '@/components/ui/notice';
 import { Loading } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
+import { ReviewStrip } from '@/features/review/components/review-strip';
 import { getStudyQueryOptions, useStudy } from '@/features/studies/api/get-study';
 import { StudyStatusBadge } from '@/features/studies/components/study-status-badge';
 import { warmCacheFor } from '@/lib/auth';
@@ -56,6 +57,7 @@ export default function StudyLayoutRoute() {
           ))}
         </ul>
       </nav>
+      <ReviewStrip studyId={s.id} status={s.status} reviewHref={paths.studyReview.href(s.id)} />
       <Outlet />
     </>
   );

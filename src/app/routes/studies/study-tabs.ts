@@ -6,4 +6,6 @@ export const studyTabs: StudyTab[] = [
   { to: '', label: 'Overview', end: true },
   { to: 'buffers', label: 'Buffers' },
   { to: 'plates', label: 'Plates' },
+  { to: 'analysis', label: 'Analysis' },
+  { to: 'review', label: 'Review' },
 ];
