@@ -42,6 +42,8 @@ export type BlockPreview = {
   location: string;
   layout: string;
   wavelengthNm: number | null;
+  /** Fluorescence: the excitation wavelength, when the label gives one (wavelengthNm is then the emission). */
+  excitationNm: number | null;
   wellsWithValues: number;
   missing: number;
   flags: Record<string, string>;

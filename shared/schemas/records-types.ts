@@ -56,6 +56,8 @@ export type StudySummary = Stamped & {
   enzymeName: string;
   assayId: string;
   assayName: string;
+  assayReadMode: 'endpoint' | 'kinetic';
+  assayQuantitation: 'extinction' | 'standard-curve';
   ownerId: string;
   ownerName: string;
   teamName: string;

@@ -151,6 +151,8 @@ describe('reader files', () => {
     expect(flagged.length).toBeGreaterThan(0);
     expect(flagged.every((r) => r.value === null)).toBe(true);
     expect(new Set(flagged.map((r) => r.flag))).toEqual(new Set(Object.values(preview.body.blocks[0].flags)));
+    const summary = await scientist.agent.get(`/api/plates/${plate.id}/reads`).expect(200);
+    expect(summary.body[0].missingCount).toBe(flagged.length);
   });
 
   it('when a file holds nothing a reader writes, then the answer says what was looked for and nothing is stored', async () => {

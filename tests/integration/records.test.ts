@@ -175,7 +175,7 @@ describe('studies', () => {
     expect(study.body).toMatchObject({ status: 'draft', ownerId: scientistId, version: 1 });
     const detail = await viewer.agent.get(`/api/studies/${study.body.id}`).expect(200);
     expect(detail.body.variants.map((x: { name: string }) => x.name)).toEqual(['WT', 'V1']);
-    expect(detail.body).toMatchObject({ enzymeName: 'Study enzyme', assayName: 'Study assay', variantCount: 2 });
+    expect(detail.body).toMatchObject({ enzymeName: 'Study enzyme', assayName: 'Study assay', variantCount: 2, assayReadMode: 'endpoint', assayQuantitation: 'extinction' });
     const edited = await send(scientist, 'patch', `/api/studies/${study.body.id}`, { notes: 'first plate Monday' }).expect(200);
     expect(edited.body.version).toBe(2);
     await send(scientist, 'patch', `/api/studies/${study.body.id}`, { referenceVariantId: crypto.randomUUID() }).expect(400);

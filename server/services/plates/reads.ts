@@ -44,6 +44,7 @@ function previewOf(block: ParsedBlock, index: number, plateFormat: number): Bloc
     location: `${block.detail.location.topLeft}:${block.detail.location.bottomRight}`,
     layout: block.detail.layout,
     wavelengthNm: block.detail.wavelength.nm ?? block.detail.wavelength.emissionNm,
+    excitationNm: block.detail.wavelength.excitationNm,
     wellsWithValues: values.length - missing,
     missing,
     flags: block.flags,
@@ -154,6 +155,7 @@ export async function importReads(db: Db, user: CurrentUser, plateId: string, up
         await tx.insert(wellRecords).values(wells.slice(i, i + 400).map((w) => ({ ...w, readId: row.id })));
       }
     }
+    await tx.update(plates).set({ updatedAt: new Date() }).where(eq(plates.id, plateId));
     await writeAudit(tx, {
       actorId: user.id,
       teamId: plate.teamId,
@@ -175,7 +177,8 @@ function readSummaryQuery(db: Db) {
       uploadedAt: readerFiles.uploadedAt,
       uploadedBy: users.name,
       wellCount: sql<number>`(select count(*)::int from ${wellRecords} where ${wellRecords.readId} = ${reads.id})`,
-      missingCount: sql<number>`(select count(*)::int from ${wellRecords} where ${wellRecords.readId} = ${reads.id} and ${wellRecords.flag} is not null)`,
+      // Wells with no usable value at all (an end point missing, or every point of a time course).
+      missingCount: sql<number>`(select count(*)::int from ${wellRecords} where ${wellRecords.readId} = ${reads.id} and ${wellRecords.value} is null and coalesce(cardinality(array_remove(${wellRecords.values}, null)), 0) = 0)`,
     })
     .from(reads)
     .innerJoin(readerFiles, eq(readerFiles.id, reads.fileId))
@@ -226,6 +229,7 @@ export async function deleteRead(db: Db, user: CurrentUser, readId: string) {
     await tx.delete(reads).where(eq(reads.id, readId));
     const left = await tx.$count(reads, eq(reads.fileId, read.fileId));
     if (left === 0) await tx.delete(readerFiles).where(eq(readerFiles.id, read.fileId));
+    await tx.update(plates).set({ updatedAt: new Date() }).where(eq(plates.id, read.plateId));
     await writeAudit(tx, { actorId: user.id, teamId: read.teamId, entity: 'read', entityId: readId, action: 'delete', before: read });
   });
 }

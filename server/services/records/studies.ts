@@ -28,6 +28,8 @@ function summaryQuery(db: Db) {
       study: studies,
       enzymeName: enzymes.name,
       assayName: assays.name,
+      assayReadMode: assays.readMode,
+      assayQuantitation: assays.quantitation,
       ownerName: users.name,
       teamName: teams.name,
       variantCount: count(studyVariants.variantId),
@@ -38,7 +40,7 @@ function summaryQuery(db: Db) {
     .innerJoin(users, eq(users.id, studies.ownerId))
     .innerJoin(teams, eq(teams.id, studies.teamId))
     .leftJoin(studyVariants, eq(studyVariants.studyId, studies.id))
-    .groupBy(studies.id, enzymes.name, assays.name, users.name, teams.name)
+    .groupBy(studies.id, enzymes.name, assays.name, assays.readMode, assays.quantitation, users.name, teams.name)
     .$dynamic();
 }
 
@@ -47,6 +49,8 @@ const toSummary = (r: SummaryRow) => ({
   ...r.study,
   enzymeName: r.enzymeName,
   assayName: r.assayName,
+  assayReadMode: r.assayReadMode,
+  assayQuantitation: r.assayQuantitation,
   ownerName: r.ownerName,
   teamName: r.teamName,
   variantCount: r.variantCount,
