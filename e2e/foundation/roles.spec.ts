@@ -2,8 +2,8 @@
 import type { Role } from '../../shared/permissions';
 import { demo, demoUser, expect, test } from '../fixtures';
 
-// Every role reads the science records; only admins see the administration pages.
-const science = ['Studies', 'Enzymes', 'Assays', 'Buffer series', 'Buffer library'];
+// Every role reads the science records and comparisons; only admins see the administration pages.
+const science = ['Studies', 'Enzymes', 'Assays', 'Buffer series', 'Buffer library', 'Comparisons'];
 const everyone = ['Home', ...science, 'Teams', 'Account'];
 const adminOnly = ['People', 'Outbox', 'Audit log'];
 

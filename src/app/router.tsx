@@ -71,11 +71,18 @@ export const router = createBrowserRouter([
             lazy: load(() => import('./routes/buffer-series/designer')),
           },
           { path: rel(paths.bufferSeries.path), lazy: load(() => import('./routes/buffer-series/designer')) },
+          // Comparisons and printable reports (issue 7): read by every role; reports outside the study tabs.
+          { path: rel(paths.comparisons.path), lazy: load(() => import('./routes/comparisons/list')) },
+          { path: rel(paths.comparison.path), lazy: load(() => import('./routes/comparisons/detail')) },
+          { path: rel(paths.comparisonReport.path), lazy: load(() => import('./routes/comparisons/report')) },
+          { path: rel(paths.studyReport.path), lazy: load(() => import('./routes/studies/report')) },
         ],
       },
       {
         element: <RequireAuth permission="records:write" />,
         children: [
+          { path: rel(paths.comparisonNew.path), lazy: load(() => import('./routes/comparisons/new')) },
+          { path: rel(paths.comparisonEdit.path), lazy: load(() => import('./routes/comparisons/edit')) },
           { path: rel(paths.studyNew.path), lazy: load(() => import('./routes/studies/new')) },
           { path: rel(paths.assayNew.path), lazy: load(() => import('./routes/assays/edit')) },
           { path: rel(paths.assayEdit.path), lazy: load(() => import('./routes/assays/edit')) },

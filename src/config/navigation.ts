@@ -12,6 +12,7 @@ export const navigation: NavEntry[] = [
   { label: 'Assays', href: paths.assays.href(), permission: 'records:read' },
   { label: 'Buffer series', href: paths.bufferSeriesList.href(), permission: 'records:read' },
   { label: 'Buffer library', href: paths.buffers.href(), permission: 'buffers:read' },
+  { label: 'Comparisons', href: paths.comparisons.href(), permission: 'records:read' },
   { label: 'Teams', href: paths.teams.href() },
   { label: 'People', href: paths.people.href(), permission: 'users:read' },
   { label: 'Outbox', href: paths.outbox.href(), permission: 'outbox:read' },

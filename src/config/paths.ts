@@ -106,4 +106,23 @@ export const paths = {
     path: '/buffer-series/:seriesId',
     href: (id: string) => `/buffer-series/${encodeURIComponent(id)}`,
   },
+  // Comparisons and printable reports (issue 7).
+  comparisons: { path: '/comparisons', href: () => '/comparisons' },
+  comparisonNew: { path: '/comparisons/new', href: () => '/comparisons/new' },
+  comparison: {
+    path: '/comparisons/:comparisonId',
+    href: (id: string) => `/comparisons/${encodeURIComponent(id)}`,
+  },
+  comparisonEdit: {
+    path: '/comparisons/:comparisonId/edit',
+    href: (id: string) => `/comparisons/${encodeURIComponent(id)}/edit`,
+  },
+  comparisonReport: {
+    path: '/comparisons/:comparisonId/report',
+    href: (id: string) => `/comparisons/${encodeURIComponent(id)}/report`,
+  },
+  studyReport: {
+    path: '/studies/:studyId/report',
+    href: (id: string) => `/studies/${encodeURIComponent(id)}/report`,
+  },
 } as const;
