@@ -58,7 +58,7 @@ export function LogActivityChart(props: LogActivityChartProps) {
     ...(asymptotes.length
       ? [
           {
-            label: `asymptotes (slopes ${asymptotes.map((a) => slopeWord(a.slope)).join(', ')})`,
+            label: `asymptotes (slopes ${[...new Set(asymptotes.map((a) => slopeWord(a.slope)))].join(', ')})`,
             color: chartTheme.inkMuted,
             mark: 'dashed' as const,
           },

@@ -52,7 +52,21 @@ export function AnalysisScreen({
       {analysis.frozen ? (
         <FrozenBanner analysis={analysis} readOnlyReason={readOnlyReason} />
       ) : (
-        readOnlyReason && <Notice title="Read-only">{readOnlyReason}</Notice>
+        readOnlyReason && (
+          <p className="flex items-center gap-2 text-sm text-ink-muted" role="note">
+            <svg viewBox="0 0 12 12" className="size-3.5 shrink-0" aria-hidden="true">
+              <path
+                d="M3.5 5V3.8a2.5 2.5 0 0 1 5 0V5M2.5 5h7v5.5h-7z"
+                fill="none"
+                stroke="currentColor"
+                strokeWidth="1.3"
+              />
+            </svg>
+            <span>
+              <span className="font-semibold text-ink">Read-only.</span> {readOnlyReason}
+            </span>
+          </p>
+        )
       )}
       <div className="space-y-1">
         <ProvenanceLine analysis={analysis} />
@@ -93,6 +107,7 @@ export function AnalysisScreen({
                 units={result.units}
                 plateNames={plateNames}
                 bootstrapCurrent={analysis.bootstrap.current}
+                flagText={result.flagText}
               />
             </>
           ) : (

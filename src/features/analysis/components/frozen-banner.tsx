@@ -72,7 +72,7 @@ function ComparisonDialog({
         </p>
         <Notice tone={changed.length || modelChanged.length ? 'warning' : 'success'}>
           {changed.length === 0 && modelChanged.length === 0
-            ? `Every parameter agrees within a relative ${LIMIT} and every model is the same.`
+            ? 'Every parameter agrees within a relative difference of 10⁻⁹, and every model is the same.'
             : `${changed.length} parameter ${changed.length === 1 ? 'value differs' : 'values differ'}; ${modelChanged.length} ${modelChanged.length === 1 ? 'model changed' : 'models changed'}.`}
         </Notice>
         <table aria-label="Stored and recomputed parameters" className="w-full border-collapse text-sm">

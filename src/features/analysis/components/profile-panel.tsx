@@ -6,6 +6,7 @@ import { ProfileChart } from '@/components/charts/profile-chart';
 import { ResidualChart } from '@/components/charts/residual-chart';
 import { Notice } from '@/components/ui/notice';
 import { profileView } from '../utils/profile-view';
+import { flagSentence } from '../utils/words';
 import { FitDetails } from './fit-details';
 import { ModelChoice } from './model-choice';
 
@@ -15,13 +16,22 @@ export type ProfilePanelProps = {
   units: Units;
   plateNames: Record<string, string>;
   bootstrapCurrent: boolean;
+  flagText: Record<string, string>;
 };
 
-export function ProfilePanel({ profile, wells, units, plateNames, bootstrapCurrent }: ProfilePanelProps) {
+export function ProfilePanel({
+  profile,
+  wells,
+  units,
+  plateNames,
+  bootstrapCurrent,
+  flagText,
+}: ProfilePanelProps) {
   const view = profileView(profile, wells, plateNames, bootstrapCurrent);
   const fit = profile.fit;
   const yLabel = `${units.activityLabel} (${units.activity})`;
   const excluded = view.wells.filter((w) => w.excluded).length;
+  const flaggedPoints = profile.points.filter((p) => p.flags.length > 0);
   return (
     <section aria-label={`Profile of ${profile.name}`} className="space-y-4">
       {profile.error && (
@@ -51,6 +61,19 @@ export function ProfilePanel({ profile, wells, units, plateNames, bootstrapCurre
         halfWindow={view.halfWindow}
         caption={`Replicate means ± SD; single wells faint${excluded ? `, ${excluded} excluded ${excluded === 1 ? 'well' : 'wells'} hollow (hover for the reason)` : ''}. Band: 95 % confidence band of the fitted curve. Marker bars: the intervals of the parameter table.`}
       />
+      {flaggedPoints.length > 0 && (
+        <div className="text-sm">
+          <p className="font-semibold">Points with flags</p>
+          <ul className="list-disc pl-5 text-warn-800">
+            {flaggedPoints.map((p) => (
+              <li key={`${p.pH}-${p.buffer}`}>
+                pH {p.pH}
+                {p.buffer ? ` (${p.buffer})` : ''}: {p.flags.map((f) => flagSentence(flagText, f)).join(' ')}
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
       <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
         <ResidualChart
           title={`${profile.name}: residuals`}

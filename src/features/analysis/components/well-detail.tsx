@@ -39,7 +39,9 @@ export function WellDetail(props: WellDetailProps) {
   const { row, units, flagText, kinetic, editable } = props;
   const w = row.window;
   return (
-    <div className="grid grid-cols-1 gap-4 md:grid-cols-[minmax(0,1fr)_minmax(0,1.25fr)]">
+    <div
+      className={`grid grid-cols-1 gap-4 ${kinetic ? 'md:grid-cols-[minmax(0,1fr)_minmax(0,1.25fr)]' : ''}`}
+    >
       <div className="space-y-3">
         <dl className="grid grid-cols-[7.5rem_1fr] gap-x-3 gap-y-0.5 text-sm">
           <Item label="Role">{roleWords[row.role] ?? row.role}</Item>
@@ -129,7 +131,6 @@ export function WellDetail(props: WellDetailProps) {
             onSave={props.onSaveSettings}
           />
         )}
-        {!kinetic && <p className="text-sm text-ink-muted">End-point read: no time course.</p>}
       </div>
     </div>
   );

@@ -23,6 +23,15 @@ export type WellsPanelProps = {
   reloading: boolean;
 };
 
+/** "A6, B6 on Plate 1; D6 on Plate 2". */
+function wellsByPlate(wells: { plateId: string; well: string }[], plateNames: Record<string, string>) {
+  const groups = new Map<string, string[]>();
+  for (const w of wells) groups.set(w.plateId, [...(groups.get(w.plateId) ?? []), w.well]);
+  return [...groups]
+    .map(([plateId, names]) => `${names.join(', ')} on ${plateNames[plateId] ?? 'a plate'}`)
+    .join('; ');
+}
+
 type Pending =
   | { kind: 'exclude'; wells: { plateId: string; well: string }[]; what: string }
   | { kind: 'include'; exclusionId: string; well: string };
@@ -108,7 +117,7 @@ export function WellsPanel({
       {chosen && (
         <Dialog
           open
-          width="lg"
+          width={kinetic ? 'lg' : 'md'}
           onClose={() => {
             edits.save.reset();
             onPick({ well: null });
@@ -144,7 +153,7 @@ export function WellsPanel({
                 const what =
                   scope === 'well'
                     ? `well ${chosen.well} of ${current.name}`
-                    : `every well of ${chosen.variantName} at pH ${chosen.pH}${chosen.buffer ? ` (${chosen.buffer})` : ''}: ${wells.map((w) => `${w.well} (${plateNames[w.plateId]})`).join(', ')}`;
+                    : `every well of ${chosen.variantName} at pH ${chosen.pH}${chosen.buffer ? ` (${chosen.buffer})` : ''}: ${wellsByPlate(wells, plateNames)}`;
                 setPending({
                   kind: 'exclude',
                   wells: wells.map((w) => ({ plateId: w.plateId, well: w.well })),

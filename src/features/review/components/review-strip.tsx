@@ -28,7 +28,7 @@ export function ReviewStrip({ studyId, status, reviewHref }: ReviewStripProps) {
       ? `In review: submitted${who}. Nothing can change until a lead approves it or returns it.`
       : status === 'approved'
         ? `Approved and locked${event ? `: approved${who}` : ''}. Its numbers, curves and files stay as approved; an admin can unlock it with a reason.`
-        : `Returned${who}${event?.body ? `: “${event.body}”` : ''}. Change what was asked, then submit it again.`;
+        : `Returned${who}${event?.body ? `: “${event.body.replace(/[.!?]+$/, '')}”` : ''}. Change what was asked, then submit it again.`;
   return (
     <div
       role="status"
