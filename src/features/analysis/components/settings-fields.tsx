@@ -68,14 +68,17 @@ export type PlateReadRowProps = {
   plateId: string;
   name: string;
   read: string;
+  /** The assay's read mode: only reads of that kind are offered (a read of the other kind cannot be analysed). */
+  kind: 'kinetic' | 'endpoint';
   disabled: boolean;
   onRead: (id: string) => void;
 };
 
 const readLabel = (r: ReadSummary) => `${r.label || r.fileName} (${r.kind}, ${formatDate(r.uploadedAt)})`;
 
-export function PlateReadRow({ plateId, name, read, disabled, onRead }: PlateReadRowProps) {
+export function PlateReadRow({ plateId, name, read, kind, disabled, onRead }: PlateReadRowProps) {
   const reads = usePlateReads(plateId);
+  const usable = (reads.data ?? []).filter((r) => r.kind === kind);
   return (
     <tr>
       <th scope="row" className="px-2 py-1 text-left font-semibold">
@@ -90,13 +93,19 @@ export function PlateReadRow({ plateId, name, read, disabled, onRead }: PlateRea
           onChange={(e) => onRead(e.target.value)}
         >
           <option value="">Newest read of the assay’s read mode</option>
-          {(reads.data ?? []).map((r: ReadSummary) => (
+          {usable.map((r) => (
             <option key={r.id} value={r.id}>
               {readLabel(r)}
             </option>
           ))}
         </select>
         {reads.isError && <p className="text-xs text-danger-600">{reads.error.message}</p>}
+        {reads.data && usable.length < reads.data.length && (
+          <p className="text-xs text-ink-muted">
+            {reads.data.length - usable.length} {kind === 'kinetic' ? 'end-point' : 'kinetic'} read(s) not
+            offered: the assay reads {kind === 'kinetic' ? 'kinetically' : 'end points'}.
+          </p>
+        )}
       </td>
     </tr>
   );

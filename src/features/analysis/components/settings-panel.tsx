@@ -111,6 +111,7 @@ export function SettingsPanel({
               plateId={plate.plateId}
               name={plate.name}
               read={draft.plateReads?.[plate.plateId] ?? ''}
+              kind={kinetic ? 'kinetic' : 'endpoint'}
               disabled={disabled}
               onRead={(id) => setDraft((d) => withEntry(d, 'plateReads', plate.plateId, id))}
             />
