@@ -114,7 +114,7 @@ export function attachBootstrap(fit: ProfileFit, ctx: FitContext, resamples: num
   fit.window.width.boot95 = percentile95(draws.width);
   model.names.forEach((name, j) => {
     if (determined[j] && free.includes(j))
-      fit.parameters[name].boot95 = percentile95(draws.params[j], ctx.unit(j));
+      fit.parameters[name].boot95 = percentile95(draws.params[j], ctx.units[j]);
   });
   fit.bootstrap = { resamples, seed, undetermined: draws.undetermined };
 }

@@ -51,13 +51,35 @@ export interface FitContext {
   s2: number | null;
   dof: number;
   t: number | null;
-  /** unit of parameter j: the activity scale for levels, 1 for pKa values */
-  unit: (j: number) => number;
+  /** unit of each parameter: the activity scale for levels, 1 for pKa values */
+  units: number[];
   fitted: Float64Array;
 }
 
+/** Standard error of parameter j from the covariance of the free parameters (scaled units). */
+function standardError(ctx: FitContext, j: number): number | null {
+  const { cov, at, free } = ctx;
+  return cov && at[j] >= 0 ? finiteOrNull(Math.sqrt(cov[at[j] * free.length + at[j]])) : null;
+}
+
+/** Delta method: √(∇gᵀ·cov·∇g) for a gradient over the model parameters. */
+function deltaMethodSE(ctx: FitContext, gradient: number[] | null): number | null {
+  if (!gradient || !ctx.cov) return null;
+  const v = quadraticFormOver(gradient, ctx.cov, ctx.free);
+  return v >= 0 ? finiteOrNull(Math.sqrt(v)) : null;
+}
+
+function shapeSE(
+  ctx: FitContext,
+  grads: Record<ShapeKey, number[] | null> | null,
+  key: ShapeKey,
+  value: number | null,
+): number | null {
+  return value === null || !grads ? null : deltaMethodSE(ctx, grads[key]);
+}
+
 function covarianceTables(ctx: FitContext) {
-  const { free, at, determined, cov, unit } = ctx;
+  const { free, at, determined, cov, units } = ctx;
   const p = at.length;
   const q = free.length;
   const covariance: (number | null)[][] = [];
@@ -72,7 +94,7 @@ function covarianceTables(ctx: FitContext) {
         rowR.push(null);
         continue;
       }
-      rowC.push(finiteOrNull(cov[ia * q + ib] * unit(a) * unit(b)));
+      rowC.push(finiteOrNull(cov[ia * q + ib] * units[a] * units[b]));
       rowR.push(finiteOrNull(cov[ia * q + ib] / Math.sqrt(cov[ia * q + ia] * cov[ib * q + ib])));
     }
     covariance.push(rowC);
@@ -145,36 +167,35 @@ export function describeFit(
     s2,
     dof,
     t: t975(dof),
-    unit: (j) => (j < model.nLinear ? S : 1),
+    units: model.names.map((_, j) => (j < model.nLinear ? S : 1)),
     fitted: f,
   };
-  const seOf = (j: number): number | null =>
-    cov && at[j] >= 0 ? finiteOrNull(Math.sqrt(cov[at[j] * q + at[j]])) : null;
-
   const parameters: Record<string, ParameterEstimate> = {};
-  model.names.forEach((name, j) => {
+  for (let j = 0; j < p; j++) {
     const known = determined[j];
-    const e = estimate(known ? theta[j] * ctx.unit(j) : null, known ? mul(seOf(j), ctx.unit(j)) : null, dof);
+    const u = ctx.units[j];
+    const e = estimate(known ? theta[j] * u : null, known ? mul(standardError(ctx, j), u) : null, dof);
     const status = known ? 'fitted' : 'not_determined';
-    parameters[name] = { value: e.value, se: e.se, ci95: e.ci95, status, profile95: null, boot95: null };
-  });
+    parameters[model.names[j]] = {
+      value: e.value,
+      se: e.se,
+      ci95: e.ci95,
+      status,
+      profile95: null,
+      boot95: null,
+    };
+  }
 
   // optimum, peak and half-activity window with delta-method errors
   const shape = curveShape(model, theta, determined);
   const grads = cov ? shapeGradients(model, theta, determined, free) : null;
-  const seFor = (key: ShapeKey, value: number | null): number | null => {
-    const g = grads?.[key];
-    if (value === null || !g || !cov) return null;
-    const v = quadraticFormOver(g, cov, free);
-    return v >= 0 ? finiteOrNull(Math.sqrt(v)) : null;
-  };
   const width = shape.lo !== null && shape.hi !== null ? shape.hi - shape.lo : null;
-  const pHopt = derived(shape.pHopt, seFor('pHopt', shape.pHopt), dof);
-  const peak = derived(mul(shape.peak, S), mul(seFor('peak', shape.peak), S), dof);
+  const pHopt = derived(shape.pHopt, shapeSE(ctx, grads, 'pHopt', shape.pHopt), dof);
+  const peak = derived(mul(shape.peak, S), mul(shapeSE(ctx, grads, 'peak', shape.peak), S), dof);
   const window = {
-    lo: derived(shape.lo, seFor('lo', shape.lo), dof),
-    hi: derived(shape.hi, seFor('hi', shape.hi), dof),
-    width: derived(width, seFor('width', width), dof),
+    lo: derived(shape.lo, shapeSE(ctx, grads, 'lo', shape.lo), dof),
+    hi: derived(shape.hi, shapeSE(ctx, grads, 'hi', shape.hi), dof),
+    width: derived(width, shapeSE(ctx, grads, 'width', width), dof),
   };
 
   const gaps = pKaGaps(ctx);

@@ -218,31 +218,33 @@ export function levenbergMarquardt(
   const ws = workspace(n, p);
   const { A, D, g, gs, delta, L, s: scale, As } = ws;
   let evaluations = 1;
-  const stop = (reason: StopReason, ssr: number, iterations: number): LmResult =>
-    finish(reason, theta, ssr, iterations, evaluations, ws, p, options);
 
-  if (!problem.evaluate(theta, ws.r, ws.J)) return stop('non-finite', NaN, 0);
+  if (!problem.evaluate(theta, ws.r, ws.J))
+    return finish('non-finite', theta, NaN, 0, evaluations, ws, p, options);
   let ssr = sumOfSquares(ws.r, n);
-  if (!Number.isFinite(ssr)) return stop('non-finite', NaN, 0);
+  if (!Number.isFinite(ssr)) return finish('non-finite', theta, NaN, 0, evaluations, ws, p, options);
   normalEquations(ws.J, ws.r, n, p, A, g);
   let maxDiag = 0;
   for (let j = 0; j < p; j++) {
     D[j] = Math.max(A[j * p + j], 1e-300);
     maxDiag = Math.max(maxDiag, A[j * p + j]);
   }
-  if (!(maxDiag > 0)) return stop(ssr === 0 ? 'converged-gradient' : 'singular', ssr, 0);
+  if (!(maxDiag > 0))
+    return finish(ssr === 0 ? 'converged-gradient' : 'singular', theta, ssr, 0, evaluations, ws, p, options);
   let lambda = 1e-3;
   let nu = 2;
 
   for (let it = 1; it <= maxIterations; it++) {
-    if (ssr === 0) return stop('converged-gradient', ssr, it - 1);
-    if (projectGradient(ws, theta, p, ssr, options) <= gtol) return stop('converged-gradient', ssr, it - 1);
+    if (ssr === 0) return finish('converged-gradient', theta, ssr, it - 1, evaluations, ws, p, options);
+    if (projectGradient(ws, theta, p, ssr, options) <= gtol)
+      return finish('converged-gradient', theta, ssr, it - 1, evaluations, ws, p, options);
     // Inner loop: raise λ until a step lowers SSR.
     for (;;) {
       if (!dampedCholeskySolve(As, D, lambda, gs, delta, p, L, scale)) {
         lambda *= nu;
         nu *= 2;
-        if (!Number.isFinite(lambda) || lambda > 1e30) return stop('singular', ssr, it);
+        if (!Number.isFinite(lambda) || lambda > 1e30)
+          return finish('singular', theta, ssr, it, evaluations, ws, p, options);
         continue;
       }
       const { pred, small } = trialStep(ws, theta, p, options, xtol);
@@ -258,19 +260,23 @@ export function levenbergMarquardt(
         for (let j = 0; j < p; j++) D[j] = Math.max(D[j], A[j * p + j]);
         lambda *= Math.max(1 / 3, 1 - Math.pow(2 * rho - 1, 3));
         nu = 2;
-        if (actual <= ftol * ssrT && pred <= ftol * ssrT && rho <= 2) return stop('converged-ssr', ssr, it);
-        if (small) return stop('converged-step', ssr, it);
+        if (actual <= ftol * ssrT && pred <= ftol * ssrT && rho <= 2)
+          return finish('converged-ssr', theta, ssr, it, evaluations, ws, p, options);
+        if (small) return finish('converged-step', theta, ssr, it, evaluations, ws, p, options);
         break;
       }
       // Rejected: at the precision limit the predicted gain itself is negligible.
-      if (Math.abs(actual) <= ftol * ssr && pred <= ftol * ssr) return stop('converged-ssr', ssr, it);
-      if (small && pred <= 1e-12 * ssr) return stop('converged-step', ssr, it);
+      if (Math.abs(actual) <= ftol * ssr && pred <= ftol * ssr)
+        return finish('converged-ssr', theta, ssr, it, evaluations, ws, p, options);
+      if (small && pred <= 1e-12 * ssr)
+        return finish('converged-step', theta, ssr, it, evaluations, ws, p, options);
       lambda *= nu;
       nu *= 2;
-      if (!Number.isFinite(lambda) || lambda > 1e30) return stop('singular', ssr, it);
+      if (!Number.isFinite(lambda) || lambda > 1e30)
+        return finish('singular', theta, ssr, it, evaluations, ws, p, options);
     }
   }
-  return stop('max-iterations', ssr, maxIterations);
+  return finish('max-iterations', theta, ssr, maxIterations, evaluations, ws, p, options);
 }
 
 /** The accepted trial's residuals and Jacobian become the current ones (buffers trade places). */

@@ -133,8 +133,8 @@ export function attachProfiles(fit: ProfileFit, ctx: FitContext, deltaGap: Gap |
       upper: { limit: isPKa ? box.hi : estimate + far, closed: false },
     });
     fit.parameters[model.names[j]].profile95 = [
-      timesOrNull(iv[0], ctx.unit(j)),
-      timesOrNull(iv[1], ctx.unit(j)),
+      timesOrNull(iv[0], ctx.units[j]),
+      timesOrNull(iv[1], ctx.units[j]),
     ];
   }
   if (fit.delta && deltaGap) {
