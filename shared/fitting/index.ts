@@ -19,6 +19,13 @@
  *
  * Models ('acid', 'base', 'bell', 'bell-plateau', 'three') and their equations: models/*.ts and
  * SCIENCE.md §1. Weights are 1/σ². Standard errors: cov = s²(JᵀWJ)⁻¹, s² = SSR/(n − p).
+ * A pKa more than 2 units beyond the measured pH range is never reported: it is null with
+ * status 'not_determined', and the fit is the simpler model it tends to.
+ *
+ * Flag codes (stable): `<parameter>_not_determined` (e.g. pKa2_not_determined),
+ * `<pKa>_outside_range` (e.g. pKa1_outside_range; pKa_outside_range for one-limb models),
+ * `pKa_too_close`, `narrow_bell`, `too_few_points`, `not_converged`, `residual_runs`,
+ * `V_lo_extrapolated`, `V_hi_extrapolated`; fitCurve adds `stalled_start`.
  */
 
 import { chooseModel as chooseModelRaw } from './choose-model';
