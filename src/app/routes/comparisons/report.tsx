@@ -5,6 +5,7 @@ import { QueryError } from '@/components/ui/notice';
 import { Loading } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { useComparison } from '@/features/comparisons/api/get-comparison';
+import { useComparisons } from '@/features/comparisons/api/get-comparisons';
 import { ComparisonChart } from '@/features/comparisons/components/comparison-chart';
 import { ComparisonPrintTables } from '@/features/comparisons/components/comparison-print-tables';
 import { ComparisonSummary } from '@/features/comparisons/components/comparison-summary';
@@ -20,6 +21,8 @@ export default function ComparisonReportRoute() {
   const { comparisonId = '' } = useParams();
   const comparison = useComparison(comparisonId);
   const teams = useTeams();
+  // The saved list names who saved it (the single comparison does not).
+  const list = useComparisons();
   if (comparison.isPending) return <Loading label="Preparing the report…" />;
   if (comparison.isError)
     return (
@@ -44,7 +47,12 @@ export default function ComparisonReportRoute() {
     >
       <ReportSection title="Comparison" keep>
         <div className="text-sm">
-          <ComparisonSummary saved={c} view={view} teamName={teamName} />
+          <ComparisonSummary
+            saved={c}
+            view={view}
+            teamName={teamName}
+            createdByName={list.data?.find((x) => x.id === c.id)?.createdByName}
+          />
         </div>
       </ReportSection>
       <ReportSection title="Relative activity">

@@ -14,6 +14,7 @@ import { useSeries } from '@/features/buffer-series/api/get-series';
 import { seriesKeys } from '@/features/buffer-series/api/keys';
 import { SeriesSummaryCard } from '@/features/buffer-series/components/series-summary';
 import { useEnzyme } from '@/features/enzymes/api/get-enzyme';
+import { ExportButtons } from '@/features/reports/components/export-buttons';
 import { useDeleteStudy } from '@/features/studies/api/delete-study';
 import { useStudy } from '@/features/studies/api/get-study';
 import { StudyForm } from '@/features/studies/components/study-form';
@@ -65,12 +66,24 @@ export default function StudyOverviewRoute() {
           {reason}
         </Notice>
       )}
-      {mayEdit && (
-        <div className="mb-4 flex gap-2">
-          <Button onClick={() => setEditing(true)}>Edit study</Button>
-          <Button onClick={() => setDeleting(true)}>Delete study</Button>
+      <div className="mb-4 flex items-center gap-2">
+        {mayEdit && (
+          <>
+            <Button onClick={() => setEditing(true)}>Edit study</Button>
+            <Button onClick={() => setDeleting(true)}>Delete study</Button>
+          </>
+        )}
+        {/* Exports and the printable report (issue 7): every role reads them. */}
+        <div className="ml-auto flex items-center gap-1.5">
+          <Link
+            to={paths.studyReport.href(s.id)}
+            className="inline-flex h-7 items-center rounded border border-line-strong bg-surface px-2.5 text-sm font-semibold hover:bg-canvas"
+          >
+            Printable report
+          </Link>
+          <ExportButtons kind="study" id={s.id} name={s.name} />
         </div>
-      )}
+      </div>
       <StudyOverview study={s} bufferSeries={seriesSlot} />
       {editing && <EditStudyDialog studyId={s.id} onClose={() => setEditing(false)} />}
       <ConfirmDialog

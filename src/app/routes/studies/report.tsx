@@ -61,7 +61,8 @@ export default function StudyReportRoute() {
   const temperature = assay.data ? ` at ${assay.data.temperatureC} °C` : '';
   const xLabel = `pH${temperature}`;
   const yLabel = `${result.units.activityLabel} (${result.units.activity})`;
-  const curves = relativeCurves(result.profiles, approved);
+  // The study's status is said once at the top; the curves do not repeat it.
+  const curves = relativeCurves(result.profiles, true);
   const reference = result.profiles.find((p) => p.isReference);
   const readsLoading = plates.isPending || reads.some((r) => r.isPending);
   const readsFailed = plates.isError || reads.some((r) => r.isError);

@@ -43,7 +43,7 @@ export function ProvenanceList({ items, files, filesNote }: ProvenanceListProps)
                   {f.name}
                   <span className="block text-xs text-ink-muted">{f.plate}</span>
                 </td>
-                <td className="py-1 pr-2 font-mono text-[10px] break-all">{f.sha256}</td>
+                <td className="py-1 pr-2 font-mono text-[9px] break-all">{f.sha256}</td>
                 <td className="py-1">
                   {f.uploadedBy}, {formatDateTime(f.uploadedAt)}
                 </td>
