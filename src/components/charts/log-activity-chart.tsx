@@ -124,8 +124,15 @@ export function LogActivityChart(props: LogActivityChartProps) {
           {curve && (
             <path d={pathThrough(curve.x, curveLog, x, y)} fill="none" stroke={color} strokeWidth={2} />
           )}
-          {shown.map((p) => (
-            <circle key={p.pH} cx={x(p.pH)} cy={y(Math.log10(p.value))} r={3.5} fill={color} stroke="#fff">
+          {shown.map((p, i) => (
+            <circle
+              key={`${p.pH}-${i}`}
+              cx={x(p.pH)}
+              cy={y(Math.log10(p.value))}
+              r={3.5}
+              fill={color}
+              stroke="#fff"
+            >
               <title>{`pH ${p.pH}: log₁₀ ${p.value.toPrecision(3)} = ${Math.log10(p.value).toFixed(2)}`}</title>
             </circle>
           ))}

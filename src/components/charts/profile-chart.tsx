@@ -5,7 +5,8 @@ import type { ReactNode } from 'react';
 import { ChartFrame } from '@/components/ui/charts/chart-frame';
 import type { ChartLegendItem } from '@/components/ui/charts/chart-legend';
 import { chartTheme } from '@/components/ui/charts/chart-theme';
-import { bandPath, ErrorBar, extent, IntervalBar, pathThrough } from './marks';
+import { bandPath, ErrorBar, extent, pathThrough } from './marks';
+import { markerRowsOf, ProfileMarkers } from './profile-markers';
 import type { ChartCurve, Domain, XMarker } from './types';
 
 export type ProfileChartPoint = { pH: number; mean: number; sd: number | null; n: number };
@@ -64,7 +65,7 @@ export function ProfileChart(props: ProfileChartProps) {
   ];
   const [yLo, yHi] = extent(ys, 0.02);
   // Head room above the data for the marker labels and interval bars.
-  const markerRows = (pKas.length > 0 ? 1 : 0) + (optimum ? 1 : 0);
+  const markerRows = markerRowsOf(pKas, optimum ?? null);
   const yDomain: Domain = [Math.min(0, yLo), yHi + (yHi - Math.min(0, yLo)) * (0.06 + 0.09 * markerRows)];
   const legend: ChartLegendItem[] = [
     { label: 'mean ± SD', color, mark: 'dot' },
@@ -95,7 +96,6 @@ export function ProfileChart(props: ProfileChartProps) {
       fileName={props.fileName}
     >
       {({ x, y, width }) => {
-        const rowY = (row: number) => 12 + row * 16;
         return (
           <>
             {curve?.lower && curve.upper && (
@@ -105,77 +105,15 @@ export function ProfileChart(props: ProfileChartProps) {
                 opacity={0.45}
               />
             )}
-            {halfWindow && (
-              <g stroke={chartTheme.inkMuted} strokeWidth={1.5}>
-                <line
-                  x1={halfWindow.lo === null ? 0 : x(halfWindow.lo)}
-                  x2={halfWindow.hi === null ? width : x(halfWindow.hi)}
-                  y1={y(halfWindow.level)}
-                  y2={y(halfWindow.level)}
-                />
-                {[halfWindow.lo, halfWindow.hi].map((v, i) =>
-                  v === null ? null : (
-                    <line
-                      key={i}
-                      x1={x(v)}
-                      x2={x(v)}
-                      y1={y(halfWindow.level) - 5}
-                      y2={y(halfWindow.level) + 5}
-                    />
-                  ),
-                )}
-              </g>
-            )}
-            {pKas.map((m) => (
-              <g key={m.label}>
-                <line
-                  x1={x(m.value)}
-                  x2={x(m.value)}
-                  y1={rowY(0)}
-                  y2={y(yDomain[0])}
-                  stroke={chartTheme.inkMuted}
-                  strokeDasharray="4 3"
-                />
-                {m.interval && <IntervalBar interval={m.interval} x={x} at={rowY(0)} width={width} />}
-                <text
-                  x={x(m.value) + 4}
-                  y={rowY(0) + 12}
-                  fontSize={chartTheme.fontSize}
-                  fill={chartTheme.inkMuted}
-                >
-                  {m.label}
-                </text>
-              </g>
-            ))}
-            {optimum && (
-              <g>
-                <line
-                  x1={x(optimum.value)}
-                  x2={x(optimum.value)}
-                  y1={rowY(markerRows - 1)}
-                  y2={y(yDomain[0])}
-                  stroke={chartTheme.ink}
-                  strokeWidth={1}
-                />
-                {optimum.interval && (
-                  <IntervalBar
-                    interval={optimum.interval}
-                    x={x}
-                    at={rowY(markerRows - 1)}
-                    width={width}
-                    color={chartTheme.ink}
-                  />
-                )}
-                <text
-                  x={x(optimum.value) + 4}
-                  y={rowY(markerRows - 1) + 12}
-                  fontSize={chartTheme.fontSize}
-                  fill={chartTheme.ink}
-                >
-                  {optimum.label}
-                </text>
-              </g>
-            )}
+            <ProfileMarkers
+              x={x}
+              y={y}
+              width={width}
+              bottom={y(yDomain[0])}
+              pKas={pKas}
+              optimum={optimum ?? null}
+              halfWindow={halfWindow ?? null}
+            />
             {curve && (
               <path d={pathThrough(curve.x, curve.y, x, y)} fill="none" stroke={color} strokeWidth={2} />
             )}
@@ -193,8 +131,8 @@ export function ProfileChart(props: ProfileChartProps) {
                   <title>{`${w.label}: ${fmt(w.value)} ${unit} at pH ${w.pH}`}</title>
                 </circle>
               ))}
-            {points.map((p) => (
-              <g key={p.pH}>
+            {points.map((p, i) => (
+              <g key={`${p.pH}-${i}`}>
                 {p.sd !== null && p.sd > 0 && (
                   <ErrorBar cx={x(p.pH)} top={y(p.mean + p.sd)} bottom={y(p.mean - p.sd)} color={color} />
                 )}
