@@ -83,6 +83,22 @@ export type StudyAnalysis = {
   job: AnalysisJob | null;
   /** Predicted well pH (buffer + enzyme + substrate, from the study's buffer series) against the nominal pH. */
   wellPh: { pH: number; buffer: string | null; predicted: number | null; drift: number | null; overLimit: boolean }[];
+  /** The read each plate's analysis used (null: the plate has none). */
+  plateReads: Record<string, string | null>;
+  assay: { readMode: 'endpoint' | 'kinetic'; quantitation: 'extinction' | 'standard-curve' };
+};
+
+/** POST /api/studies/:id/analysis/recompute: a fresh computation beside the stored one (nothing stored). */
+export type RecomputeComparison = {
+  stored: { inputHash: string; engineVersion: string; analysisVersion: string; computedAt: string } | null;
+  recomputed: { inputHash: string; engineVersion: string; analysisVersion: string };
+  sameInputs: boolean;
+  differences: {
+    variantId: string;
+    name: string;
+    model: { stored: string | null; recomputed: string | null };
+    parameters: Record<string, { stored: number | null; recomputed: number | null; relativeDifference: number | null }>;
+  }[];
 };
 
 export type EngineSettings = AnalysisSettings;

@@ -57,6 +57,9 @@ export const router = createBrowserRouter([
               { path: 'plates', lazy: load(() => import('./routes/studies/plates')) },
               { path: 'plates/:plateId', lazy: load(() => import('./routes/studies/plates-detail')) },
               { path: 'plates/:plateId/import', lazy: load(() => import('./routes/studies/plates-import')) },
+              // Analysis and review (issue 6).
+              { path: 'analysis', lazy: load(() => import('./routes/studies/analysis')) },
+              { path: 'review', lazy: load(() => import('./routes/studies/review')) },
             ],
           },
           { path: rel(paths.enzymes.path), lazy: load(() => import('./routes/enzymes/list')) },

@@ -2,6 +2,7 @@
 // invented "true" bell-curve parameters with noise added (server/db/seed/demo-reads.ts, generated).
 // Rates, blanks and fits run on the server; exclusions refit at once and are audited; approval
 // locks every mutating route of the study; the bootstrap runs as a pg-boss job.
+import fs from 'node:fs';
 import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { StudyAnalysis } from '../../shared/schemas/analysis';
@@ -92,6 +93,21 @@ describe('analysis of the generated kinetic study', () => {
     expect(rows.find((w) => w.well === 'B6')!.window?.source).toBe('automatic');
     const stale = await send(scientist, 'put', `/api/studies/${kineticStudyId}/analysis/settings`, { version: current.settingsVersion, settings });
     expect(stale.status).toBe(409);
+    expect((res.body as StudyAnalysis).plateReads[plate.id]).toEqual(expect.any(String));
+    expect((res.body as StudyAnalysis).assay.readMode).toBe('kinetic');
+
+    // A setting the engine cannot use (an end-point read for a kinetic assay) is refused and not kept.
+    const endpoint = await scientist.agent
+      .post(`/api/plates/${plate.id}/reads`)
+      .set('X-CSRF-Token', scientist.csrf)
+      .field('selection', JSON.stringify([{ type: 'endpoint', blockIndex: 0 }]))
+      .attach('file', fs.readFileSync('tests/fixtures/readers/endpoint-96-single.xlsx'), 'endpoint.xlsx')
+      .expect(201);
+    const latest = (res.body as StudyAnalysis).settingsVersion;
+    const wrongRead = await send(scientist, 'put', `/api/studies/${kineticStudyId}/analysis/settings`, { version: latest, settings: { ...settings, plateReads: { [plate.id]: endpoint.body.readIds[0] } } });
+    expect(wrongRead.status).toBe(422);
+    const after = (await scientist.agent.get(`/api/studies/${kineticStudyId}/analysis`).expect(200)).body as StudyAnalysis;
+    expect(after.settingsVersion).toBe(latest);
   });
 
   it('when the bootstrap runs in the background, then its progress finishes and the intervals appear', async () => {

@@ -4,7 +4,7 @@
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { analyseStudy, type AnalysisResult, type VariantProfile } from '../../../shared/analysis';
 import type { BootstrapSummary } from '../../../shared/fitting';
-import type { AnalysisJob, ExclusionView, StudyAnalysis, StudyAnalysisSettings } from '../../../shared/schemas/analysis';
+import type { AnalysisJob, ExclusionView, RecomputeComparison, StudyAnalysis, StudyAnalysisSettings } from '../../../shared/schemas/analysis';
 import type { DesignedSeries } from '../../../shared/schemas/buffer-series';
 import type { Db, DbOrTx } from '../../db/client';
 import { analysisJobs, analysisRuns, analysisSettings, bufferSeries, exclusions, plates, preparations, profileFits, reads, studies, studyVariants, users } from '../../db/schema';
@@ -130,6 +130,8 @@ export async function getAnalysis(db: Db, user: CurrentUser, studyId: string): P
     bootstrap: { current: boot.current, at: boot.current ? (run?.bootstrapAt?.toISOString() ?? null) : null, resamples: boot.current ? (store?.resamples ?? null) : null },
     job: await latestJob(db, studyId, effectiveHash),
     wellPh: await predictedWellPh(db, study),
+    plateReads: built.usedReads,
+    assay: built.assay,
   };
 }
 
@@ -148,7 +150,7 @@ async function predictedWellPh(db: DbOrTx, study: Study): Promise<StudyAnalysis[
 }
 
 /** Recomputes an analysis from its inputs without storing it, and says what differs from the stored one. */
-export async function recomputeAndCompare(db: Db, user: CurrentUser, studyId: string) {
+export async function recomputeAndCompare(db: Db, user: CurrentUser, studyId: string): Promise<RecomputeComparison> {
   const study = await loadVisible(db, studies, studyId, user, 'That study');
   const built = await buildAnalysisInput(db, study);
   const run = await db.query.analysisRuns.findFirst({ where: eq(analysisRuns.studyId, studyId) });
@@ -204,6 +206,11 @@ export async function saveSettings(db: Db, user: CurrentUser, studyId: string, v
       ? await tx.update(analysisSettings).set(values).where(and(eq(analysisSettings.studyId, studyId), eq(analysisSettings.version, version))).returning()
       : await tx.insert(analysisSettings).values({ studyId, ...values }).onConflictDoNothing().returning();
     if (saved.length === 0) throw conflict('The analysis settings were changed by someone else since you opened them; reload.', 'stale_version');
+    // Settings the engine cannot work with are refused before they are kept (the transaction rolls back).
+    const check = analyseStudy((await buildAnalysisInput(tx, study)).input);
+    if (!check.ok && check.error.code !== 'no_reads' && check.error.code !== 'no_plates') {
+      throw new AppError(`analysis_${check.error.code}`, `These settings cannot be used: ${check.error.message}`, 422);
+    }
     await writeAudit(tx, { actorId: user.id, teamId: study.teamId, entity: 'analysis-settings', entityId: studyId, action: 'update', before: current?.settings ?? {}, after: settings });
   });
   return getAnalysis(db, user, studyId);

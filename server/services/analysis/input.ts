@@ -69,6 +69,7 @@ export async function buildAnalysisInput(db: DbOrTx, study: Study) {
     .orderBy(asc(exclusions.createdAt));
 
   const { plateReads: _reads, preparations: _preps, ...engineSettings } = settings;
+  const usedReads = Object.fromEntries(platesInput.map((p) => [p.id, p.read?.id ?? null]));
   const input: AnalysisInput = {
     assay: {
       readMode: assay.readMode,
@@ -94,7 +95,7 @@ export async function buildAnalysisInput(db: DbOrTx, study: Study) {
     settings: engineSettings,
     exclusions: active.map((e) => ({ id: e.id, plateId: e.plateId, well: e.well, reason: e.reason })),
   };
-  return { input, settings, settingsVersion: version, exclusions: active };
+  return { input, settings, settingsVersion: version, exclusions: active, usedReads, assay: { readMode: assay.readMode, quantitation: assay.quantitation } };
 }
 
 /** SHA-256 of the input in a stable key order, with the engine and analysis versions. */
