@@ -3,6 +3,7 @@ import { idParams } from '../../shared/schemas/common';
 import { approveSchema, commentSchema, returnSchema, submitSchema, unlockSchema } from '../../shared/schemas/review';
 import { requirePermission } from '../auth/authorize';
 import { sendAfterCommit, type AppContext } from '../context';
+import { getAnalysis } from '../services/analysis/analysis';
 import { addComment, studyHistory, transition } from '../services/review/review';
 import { body, params } from '../validate';
 
@@ -23,7 +24,10 @@ export function registerReviewRoutes(api: Router, ctx: AppContext) {
   api.post('/studies/:id/approve', async (req, res) => {
     const user = requirePermission(req, 'studies:review');
     const { id } = params(req, idParams);
-    const { study, mail } = await transition(ctx, user, id, 'approve', body(req, approveSchema).comment);
+    const comment = body(req, approveSchema).comment;
+    // The analysis the lead reviewed is stored before the lock (its fits then serve comparisons).
+    await getAnalysis(ctx.db, user, id).catch(() => undefined);
+    const { study, mail } = await transition(ctx, user, id, 'approve', comment);
     res.json({ status: study.status, mailSent: await sendAfterCommit(ctx, mail) });
   });
 

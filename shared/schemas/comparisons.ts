@@ -63,7 +63,16 @@ export type ComparisonView = {
   units: Record<string, string>;
   globalFit: (GlobalFit & { labels: Record<string, string> }) | { error: string } | null;
   /** The profiles' provenance: engine version and input hash of each stored fit. */
-  provenance: { key: string; engineVersion: string; inputHash: string; computedAt: string; approvedAt: string | null; approvedBy: string | null }[];
+  provenance: {
+    key: string;
+    engineVersion: string;
+    inputHash: string;
+    computedAt: string;
+    approvedAt: string | null;
+    approvedBy: string | null;
+    /** The study's raw reader files (name and SHA-256). */
+    rawFiles: { fileName: string; sha256: string }[];
+  }[];
 };
 
 export type SavedComparison = {
@@ -77,6 +86,9 @@ export type SavedComparison = {
   globalFit: ComparisonInput['globalFit'];
   version: number;
   createdBy: string;
+  createdByName?: string;
   createdAt: string;
   updatedAt: string;
+  /** In lists: each entry's "variant — study" label (null when that profile no longer exists). */
+  labels?: Record<string, string | null>;
 };

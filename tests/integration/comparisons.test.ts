@@ -64,6 +64,7 @@ describe('comparison of variants', () => {
     expect(e228q.differences.pKa1!.clear).toBe(false);
     expect(view.curves).toHaveLength(3);
     expect(view.provenance.every((p) => p.approvedBy === 'Daniel Osei')).toBe(true);
+    expect(view.provenance[0].rawFiles.map((f) => f.sha256)).toEqual([expect.stringMatching(/^[0-9a-f]{64}$/), expect.stringMatching(/^[0-9a-f]{64}$/), expect.stringMatching(/^[0-9a-f]{64}$/)]);
   });
 
   it('when a study is not approved, then it is refused unless asked for, and then marked', async () => {
@@ -99,6 +100,10 @@ describe('comparison of variants', () => {
       .expect(201);
     const seen = await viewer.agent.get(`/api/comparisons/${saved.body.id}`).expect(200);
     expect(seen.body.view.result.rows).toHaveLength(2);
+    expect(seen.body.createdByName).toBe('Daniel Osei');
+    const list = await viewer.agent.get('/api/comparisons').expect(200);
+    const listed = list.body.find((c: { id: string }) => c.id === saved.body.id);
+    expect(Object.values(listed.labels)).toEqual(['FR1-WT — FR1 variants, kinetic pH profile (demo)', 'FR1-D92N — FR1 variants, kinetic pH profile (demo)']);
     await viewer.agent.delete(`/api/comparisons/${saved.body.id}`).set('X-CSRF-Token', viewer.csrf).expect(403);
     await outsider.agent.get(`/api/comparisons/${saved.body.id}`).expect(404);
 

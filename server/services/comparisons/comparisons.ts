@@ -6,7 +6,7 @@ import { compareProfiles, entryKey, type ComparisonEntryInput } from '../../../s
 import { fitGlobal } from '../../../shared/fitting';
 import type { AvailableProfile, ComparisonInput, ComparisonView, SavedComparison } from '../../../shared/schemas/comparisons';
 import type { Db } from '../../db/client';
-import { assays, comparisons, profileFits, studies, studyEvents, users, variants } from '../../db/schema';
+import { assays, comparisons, plates, profileFits, readerFiles, studies, studyEvents, users, variants } from '../../db/schema';
 import { badRequest, conflict } from '../../errors';
 import type { CurrentUser } from '../../types';
 import { writeAudit } from '../audit/write-audit';
@@ -79,7 +79,14 @@ export async function computeComparison(db: Db, user: CurrentUser, input: Compar
     const key = entryKey({ studyId, variantId });
     units[key] = profile.units.activity;
     const approval = await approvalOf(db, studyId);
+    const files = await db
+      .select({ fileName: readerFiles.fileName, sha256: readerFiles.sha256 })
+      .from(readerFiles)
+      .innerJoin(plates, eq(plates.id, readerFiles.plateId))
+      .where(eq(plates.studyId, studyId))
+      .orderBy(asc(readerFiles.uploadedAt));
     provenance.push({
+      rawFiles: files,
       key,
       engineVersion: stored.engineVersion,
       inputHash: stored.inputHash,
@@ -130,12 +137,29 @@ export async function listComparisons(db: Db, user: CurrentUser, teamId?: string
     .innerJoin(users, eq(users.id, comparisons.createdBy))
     .where(scope ? inArray(comparisons.teamId, scope) : undefined)
     .orderBy(desc(comparisons.updatedAt));
-  return rows.map(({ c, by }) => ({ ...toSaved(c), createdByName: by }));
+  const saved = rows.map(({ c, by }) => ({ ...toSaved(c), createdByName: by }));
+  const labels = await entryLabels(db, saved.flatMap((c) => c.entries));
+  return saved.map((c) => ({ ...c, labels: Object.fromEntries(c.entries.map((e) => [entryKey(e), labels.get(entryKey(e)) ?? null])) }));
+}
+
+/** "FR1-D92N — Study name" for each study:variant key that still exists. */
+async function entryLabels(db: Db, entries: { studyId: string; variantId: string }[]) {
+  const labels = new Map<string, string>();
+  if (entries.length === 0) return labels;
+  const studyRows = await db.select({ id: studies.id, name: studies.name }).from(studies).where(inArray(studies.id, [...new Set(entries.map((e) => e.studyId))]));
+  const variantRows = await db.select({ id: variants.id, name: variants.name }).from(variants).where(inArray(variants.id, [...new Set(entries.map((e) => e.variantId))]));
+  for (const e of entries) {
+    const study = studyRows.find((x) => x.id === e.studyId);
+    const variant = variantRows.find((x) => x.id === e.variantId);
+    if (study && variant) labels.set(entryKey(e), `${variant.name} — ${study.name}`);
+  }
+  return labels;
 }
 
 export async function getComparison(db: Db, user: CurrentUser, id: string) {
   const row = await loadVisible(db, comparisons, id, user, 'That comparison');
-  const saved = toSaved(row);
+  const creator = await db.query.users.findFirst({ where: eq(users.id, row.createdBy) });
+  const saved = { ...toSaved(row), createdByName: creator?.name ?? '' };
   const view = await computeComparison(db, user, {
     teamId: saved.teamId,
     entries: saved.entries,

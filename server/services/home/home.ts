@@ -26,8 +26,9 @@ export async function homeView(db: Db, user: CurrentUser): Promise<HomeView> {
           .where(scope ? inArray(readerFiles.teamId, scope) : undefined)
           .orderBy(desc(readerFiles.uploadedAt))
           .limit(10);
+  const uploadCount = scope?.length === 0 ? 0 : await db.$count(readerFiles, scope ? inArray(readerFiles.teamId, scope) : undefined);
   return asJson({
-    counts: { myDrafts: mine.length, awaitingReview: review.length, approved: all.filter((s) => s.status === 'approved').length, uploads: uploads.length, studies: all.length },
+    counts: { myDrafts: mine.length, awaitingReview: review.length, approved: all.filter((s) => s.status === 'approved').length, uploads: uploadCount, studies: all.length },
     myDrafts: mine,
     awaitingReview: review,
     recentlyApproved: approved,
