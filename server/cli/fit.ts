@@ -132,12 +132,14 @@ function failedResult(
 
 function fitOne(d: Dataset, args: Args): Record<string, unknown> {
   const n = Array.isArray(d.pH) ? d.pH.length : 0;
-  // only what the results format holds is computed: no profile likelihood, no alternative fit
+  // only what the results format holds is computed: no profile likelihood, no alternative fit,
+  // no residual or covariance tables
   const fit = fitProfile(d, {
     model: args.model,
     profile: false,
     alternative: false,
     bootstrap: args.bootstrap,
+    detail: 'summary',
   });
   return fit.ok
     ? resultOf(d.id, fit.value, args.bootstrap)

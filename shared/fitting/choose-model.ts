@@ -70,6 +70,7 @@ export function chooseModel(
       seed: options.seed ?? 1,
       alternative: false,
       maxIterations: options.maxIterations ?? 200,
+      detail: 'summary', // the comparison needs only sums of squares and parameter status
     });
     if (fit) fits.set(c, fit);
   }
@@ -135,6 +136,7 @@ export function chooseModel(
     seed: options.seed ?? 1,
     alternative: options.alternative ?? true,
     maxIterations: options.maxIterations ?? 200,
+    detail: options.detail ?? 'full',
   });
   const fit = full ?? current;
   fit.selection = { proposed: current.model, reason, candidates: summaries, tests };

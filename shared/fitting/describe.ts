@@ -20,6 +20,9 @@ export interface DescribeOptions {
   profile: boolean;
   bootstrap: number;
   seed: number;
+  /** 'summary' (bulk runs such as the command line): no residual, fitted or covariance tables
+   *  and no uncertainty of the peak and window — only what the results format holds */
+  detail: 'full' | 'summary';
 }
 
 const mul = timesOrNull;
@@ -142,13 +145,17 @@ export function describeFit(
   const n = data.nUsed;
   const dof = n - q;
 
+  const full = options.detail === 'full';
   const { J, f } = modelJacobian(model, data, theta);
   let ssr = 0;
+  const raw = new Float64Array(data.n); // residuals in the solver's units, for the runs test
   const residuals: (number | null)[] = [];
   const fitted: (number | null)[] = [];
   for (let i = 0; i < data.n; i++) {
     const r = data.y[i] - f[i];
+    raw[i] = r;
     if (data.w[i] > 0) ssr += data.w[i] * r * r;
+    if (!full) continue;
     residuals.push(finiteOrNull(r * S));
     fitted.push(finiteOrNull(f[i] * S));
   }
@@ -188,14 +195,15 @@ export function describeFit(
 
   // optimum, peak and half-activity window with delta-method errors
   const shape = curveShape(model, theta, determined);
-  const grads = cov ? shapeGradients(model, theta, determined, free) : null;
+  const grads = cov && (full || shape.pHopt !== null) ? shapeGradients(model, theta, determined, free) : null;
+  const wgrads = full ? grads : null;
   const width = shape.lo !== null && shape.hi !== null ? shape.hi - shape.lo : null;
   const pHopt = derived(shape.pHopt, shapeSE(ctx, grads, 'pHopt', shape.pHopt), dof);
-  const peak = derived(mul(shape.peak, S), mul(shapeSE(ctx, grads, 'peak', shape.peak), S), dof);
+  const peak = derived(mul(shape.peak, S), mul(shapeSE(ctx, wgrads, 'peak', shape.peak), S), dof);
   const window = {
-    lo: derived(shape.lo, shapeSE(ctx, grads, 'lo', shape.lo), dof),
-    hi: derived(shape.hi, shapeSE(ctx, grads, 'hi', shape.hi), dof),
-    width: derived(width, shapeSE(ctx, grads, 'width', width), dof),
+    lo: derived(shape.lo, shapeSE(ctx, wgrads, 'lo', shape.lo), dof),
+    hi: derived(shape.hi, shapeSE(ctx, wgrads, 'hi', shape.hi), dof),
+    width: derived(width, shapeSE(ctx, wgrads, 'width', width), dof),
   };
 
   const gaps = pKaGaps(ctx);
@@ -205,7 +213,7 @@ export function describeFit(
     model.names[model.nLinear] === 'pKa1'
       ? derived(deltaGap?.delta ?? null, deltaGap?.se ?? null, dof)
       : null;
-  const runs = runsTest(data.pH, residuals, data.w);
+  const runs = runsTest(data.pH, raw, data.w);
   const flags = buildFlags({
     model,
     theta,
@@ -242,7 +250,7 @@ export function describeFit(
     peak,
     delta,
     window,
-    ...covarianceTables(ctx),
+    ...(full ? covarianceTables(ctx) : { covariance: [], correlation: [] }),
     fitted,
     residuals,
     runs,

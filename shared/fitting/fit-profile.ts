@@ -20,6 +20,11 @@ export interface FitOptions {
   alternative?: boolean;
   /** iteration limit of the solver (default 200) */
   maxIterations?: number;
+  /**
+   * 'full' (default) or 'summary' for bulk runs: the same parameters, SEs, optimum and flags,
+   * without residual, fitted and covariance tables or the uncertainty of the peak and window
+   */
+  detail?: 'full' | 'summary';
 }
 
 /** The simpler model a fit tends to when one of its pKa values runs out of the data. */
@@ -57,7 +62,11 @@ export function checkOptions(options: FitOptions): Result<Required<FitOptions> &
   if (!Number.isInteger(maxIterations) || maxIterations < 1) {
     return fail('bad_option', 'The iteration limit must be a positive whole number.');
   }
+  const detail = options.detail ?? 'full';
+  if (detail !== 'full' && detail !== 'summary')
+    return fail('bad_option', "detail must be 'full' or 'summary'.");
   return ok({
+    detail,
     model,
     profile: options.profile ?? true,
     bootstrap,

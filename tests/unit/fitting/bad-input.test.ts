@@ -20,6 +20,7 @@ describe('bad input returns a typed error with a message, never a throw', () => 
     ['no object at all', null, {}, 'empty'],
     ['an unknown model', { pH, v }, { model: 'gauss' }, 'unknown_model'],
     ['a fractional bootstrap count', { pH, v }, { bootstrap: 2.5 }, 'bad_option'],
+    ['an unknown detail', { pH, v }, { detail: 'some' }, 'bad_option'],
   ];
   for (const [what, input, options, code] of cases) {
     it(`fitProfile: ${what} → ${code}`, () => {

@@ -167,3 +167,20 @@ describe('curveWithBand', () => {
     expect(r.value.upper.every((v) => v !== null)).toBe(true);
   });
 });
+
+describe("detail 'summary' (bulk runs)", () => {
+  it('gives the same parameters, SEs, optimum and flags as the full report, without the tables', () => {
+    for (const d of bell200.slice(0, 40)) {
+      const full = unwrap(fitProfile(d, { profile: false }));
+      const summary = unwrap(fitProfile(d, { profile: false, detail: 'summary' }));
+      expect(summary.parameters).toEqual(full.parameters);
+      expect(summary.pHopt).toEqual(full.pHopt);
+      expect(summary.flags).toEqual(full.flags);
+      expect(summary.ssr).toBe(full.ssr);
+      expect(summary.window.lo.value).toBe(full.window.lo.value);
+      expect(summary.residuals).toEqual([]);
+      expect(summary.covariance).toEqual([]);
+      expect(summary.window.lo.se).toBeNull();
+    }
+  });
+});
