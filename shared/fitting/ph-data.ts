@@ -115,7 +115,18 @@ export function prepareProfile(input: ProfileInput, minPoints: number): Result<P
 }
 
 function countDistinct(data: PhData): number {
-  const seen = new Set<number>();
-  for (let i = 0; i < data.n; i++) if (data.w[i] > 0) seen.add(data.pH[i]);
-  return seen.size;
+  // profiles usually come sorted by pH: then counting changes suffices
+  let count = 0;
+  let last = NaN;
+  for (let i = 0; i < data.n; i++) {
+    if (!(data.w[i] > 0)) continue;
+    if (data.pH[i] < last) {
+      const seen = new Set<number>();
+      for (let k = 0; k < data.n; k++) if (data.w[k] > 0) seen.add(data.pH[k]);
+      return seen.size;
+    }
+    if (data.pH[i] !== last) count++;
+    last = data.pH[i];
+  }
+  return count;
 }

@@ -13,7 +13,7 @@ export interface GridPoint {
   ssr: number;
 }
 
-const GRID_STEPS = 8;
+const GRID_STEPS = 6;
 
 /**
  * Weighted least squares for the m ≤ 3 linear levels given the basis values φ (n×m), solved by

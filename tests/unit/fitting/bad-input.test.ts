@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { chooseModel, curveWithBand, evaluateModel, fitCurve, fitGlobal, fitProfile } from '@shared/fitting';
+import { prepareProfile } from '@shared/fitting/ph-data';
 
 const pH = [4, 5, 6, 7, 8, 9];
 const v = [1, 5, 9, 9, 5, 1];
@@ -70,5 +71,19 @@ describe('bad input returns a typed error with a message, never a throw', () => 
     expect(r.ok).toBe(true);
     const text = JSON.stringify(r);
     expect(JSON.parse(text)).toEqual(r);
+  });
+});
+
+describe('prepared profiles', () => {
+  it('count distinct pH values whether or not the points come sorted', () => {
+    for (const pH of [
+      [5, 5, 6, 7, 7],
+      [7, 5, 6, 5, 7],
+    ]) {
+      const r = prepareProfile({ pH, v: [1, 2, 3, 4, 5] }, 3);
+      expect(r.ok && r.value.distinctPH).toBe(3);
+    }
+    const weighted = prepareProfile({ pH: [5, 6, 7, 8], v: [1, 2, 3, 4], w: [1, 0, 1, 1] }, 3);
+    expect(weighted.ok && weighted.value.distinctPH).toBe(3);
   });
 });
