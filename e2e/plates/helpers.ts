@@ -7,11 +7,12 @@ export const readerFixture = (name: string) => path.resolve('tests/fixtures/read
 
 type StudyRow = { id: string; name: string; status: string };
 
-/** The demo seed's studies, read with the signed-in page's session. */
+/** The demo seed's studies (their names end in "(demo)"), read with the signed-in page's session.
+ *  Other browser tests make studies of their own; those are never picked. */
 export async function demoStudy(request: APIRequestContext, status: 'draft' | 'in_review' | 'approved') {
   const res = await request.get('/api/studies');
   expect(res.ok()).toBe(true);
-  const study = ((await res.json()) as StudyRow[]).find((s) => s.status === status);
+  const study = ((await res.json()) as StudyRow[]).find((s) => s.status === status && s.name.endsWith('(demo)'));
   if (!study) throw new Error(`the demo seed has no ${status} study`);
   return study;
 }
