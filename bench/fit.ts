@@ -1,7 +1,7 @@
 // Fitting-engine figures (printed only; nothing is asserted here — the tests check correctness):
 //  1. bell fits per second on bell-5000.json through the command line as a whole process, beside
 //     the reference figures of shared/reference/README.md, with the agreement to the exact minima;
-//  2. start-up cost of the TypeScript runner (tsx) on its own;
+//  2. start-up cost of the command on its own, and the whole process on one thread only;
 //  3. one profile with 1,000 bootstrap resamples;
 //  4. ml-levenberg-marquardt on the NIST and reference checks (why Bellwether has its own solver).
 import { spawnSync } from 'node:child_process';
@@ -31,11 +31,11 @@ const exact = new Map(
  * Runs a command; wall time from here, CPU time (user + system of the child) from bash's `times`,
  * which stays meaningful when other work shares the machine.
  */
-function timed(command: string, args: string[]) {
+function timed(command: string, args: string[], extraEnv: Record<string, string> = {}) {
   const quoted = [command, ...args].map((a) => `'${a.replace(/'/g, "'\\''")}'`).join(' ');
   const script = `${quoted} > "$OUT" 2> "$ERR"; status=$?; times; exit $status`;
   const dir = mkdtempSync(join(tmpdir(), 'bench-fit-'));
-  const env = { ...process.env, OUT: join(dir, 'out'), ERR: join(dir, 'err') };
+  const env = { ...process.env, ...extraEnv, OUT: join(dir, 'out'), ERR: join(dir, 'err') };
   const t0 = process.hrtime.bigint();
   const r = spawnSync('bash', ['-c', script], { cwd: root, encoding: 'utf8', env });
   const seconds = Number(process.hrtime.bigint() - t0) / 1e9;
@@ -60,8 +60,10 @@ line(
     )} (1 / 5 / 15 min) on ${availableParallelism()} cores — other work on the machine slows the wall-clock figures`,
 );
 
-// 1–2. whole process and loop, through the installed entry point (bin/bellwether.js registers tsx)
+// 1–2. whole process and loop, through the installed entry point (bin/bellwether.js runs the
+// bundled command, made once by esbuild; the first call below makes it if the sources changed)
 const file = join(fixtures, 'bell-5000.json');
+timed(process.execPath, ['bin/bellwether.js', '--help']);
 const startupRuns = Array.from({ length: REPEATS }, () =>
   timed(process.execPath, ['bin/bellwether.js', '--help']),
 );
@@ -75,6 +77,14 @@ const n = Number(/ n=(\d+)/.exec(runs[0].stderr)?.[1]);
 const whole = median(runs.map((r) => r.seconds));
 const wholeCpu = median(runs.map((r) => r.cpu));
 const viaNpm = timed('npm', ['run', '--silent', 'bellwether', '--', 'fit', file, '--timing']).seconds;
+const oneThread = Array.from({ length: REPEATS }, () =>
+  timed(process.execPath, ['bin/bellwether.js', 'fit', file, '--model', 'bell', '--timing'], {
+    BELLWETHER_THREADS: '1',
+  }),
+);
+const oneThreadWhole = median(oneThread.map((r) => r.seconds));
+const oneThreadLoop = median(oneThread.map((r) => Number(/fits_per_s=(\d+)/.exec(r.stderr)?.[1])));
+if (oneThread[0].stdout !== runs[0].stdout) throw new Error('one thread and several threads disagree');
 
 const results = JSON.parse(runs[0].stdout).results as (Ref & { converged: boolean })[];
 let agree = 0;
@@ -88,7 +98,7 @@ for (const r of results) {
 }
 
 line(
-  `bell model, bell-5000.json (${n} profiles), median of ${REPEATS} runs of bin/bellwether.js fit --timing`,
+  `bell model, bell-5000.json (${n} profiles), median of ${REPEATS} runs of bin/bellwether.js fit --timing, on ${availableParallelism()} threads`,
 );
 line(`  fitting loop:   ${median(loopRates)} fits/s        (scipy ≈ 1,280; R ≈ 510)`);
 line(`  whole process:  ${Math.round(n / whole)} fits/s  (${whole.toFixed(2)} s; scipy ≈ 1,100; R ≈ 405)`);
@@ -96,7 +106,10 @@ line(
   `  ratio to scipy: loop ${(median(loopRates) / 1280).toFixed(1)}×, whole process ${(n / whole / 1100).toFixed(1)}×`,
 );
 line(
-  `  tsx start-up alone (bin/bellwether.js --help): ${startup.toFixed(2)} s; via npm run: ${viaNpm.toFixed(2)} s for the whole fit`,
+  `  on one thread (BELLWETHER_THREADS=1): loop ${oneThreadLoop} fits/s, whole process ${Math.round(n / oneThreadWhole)} fits/s (${oneThreadWhole.toFixed(2)} s), same output bytes`,
+);
+line(
+  `  start-up alone (bin/bellwether.js --help): ${startup.toFixed(2)} s; via npm run: ${viaNpm.toFixed(2)} s for the whole fit (npm's own start-up included)`,
 );
 line(`  whole process without the start-up: ${Math.round(n / (whole - startup))} fits/s`);
 line(

@@ -1,4 +1,5 @@
-// The `buffer` command, spawned as a user runs it: `npx tsx server/cli/index.ts buffer ...`.
+// The `buffer` command, spawned as a user runs it: `node bin/bellwether.js buffer ...` (what
+// `npm run bellwether -- buffer ...` runs).
 // All runs start together in beforeAll (each process takes a second or two to start).
 import { execFile } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
@@ -16,8 +17,8 @@ interface Run {
 function bellwether(args: string[]): Promise<Run> {
   return new Promise((resolve) => {
     execFile(
-      'npx',
-      ['tsx', 'server/cli/index.ts', ...args],
+      process.execPath,
+      ['bin/bellwether.js', ...args],
       { cwd: root, timeout: 120_000 },
       (error, stdout, stderr) => {
         const code = error ? (typeof error.code === 'number' ? error.code : 1) : 0;

@@ -8,7 +8,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { ENGINE_VERSION } from '@shared/fitting';
 import { readReference, rel, type RefDataset, type RefFit } from './helpers/reference';
 
-// The `fit` command run as a child process, as a user runs it. Input: three profiles of
+// The `fit` command run as a child process through the installed entry point, as a user runs it
+// (`npm run bellwether` runs bin/bellwether.js, which runs the bundled command). Input: three profiles of
 // bell-200.json (s1-00000 both limbs, s1-00004 acid limb only, s1-00008 base limb only) and two
 // broken ones; expected numbers from bell-200.exact.json and bell-200.scipy.json.
 const root = fileURLToPath(new URL('../../..', import.meta.url));
@@ -25,10 +26,15 @@ const file = (name: string, content: string): string => {
   return path;
 };
 
-async function fit(args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
+async function fit(
+  args: string[],
+  env: Record<string, string> = {},
+): Promise<{ code: number; stdout: string; stderr: string }> {
   try {
-    const { stdout, stderr } = await run('npx', ['tsx', 'server/cli/index.ts', 'fit', ...args], {
+    const { stdout, stderr } = await run(process.execPath, ['bin/bellwether.js', 'fit', ...args], {
       cwd: root,
+      env: { ...process.env, ...env },
+      maxBuffer: 64 * 1024 * 1024,
     });
     return { code: 0, stdout, stderr };
   } catch (error) {
@@ -182,5 +188,25 @@ describe('bellwether fit', () => {
       expect(stdout).toBe('');
       expect(stderr).toMatch(message);
     }
+  });
+
+  it('gives the same bytes whether the datasets are fitted on one thread or shared among worker threads', async () => {
+    // the first 1,200 profiles of bell-5000.json (shared/reference), with two broken ones among them
+    const all = readReference<{ datasets: RefDataset[] }>('bell-5000.json').datasets.slice(0, 1200);
+    all.splice(517, 0, { id: 'broken', pH: [4, 5, 6], v: [1, 2] } as unknown as RefDataset);
+    all.splice(1010, 0, { id: 'nan', pH: [4, 5, 6, 7], v: [1, null, 3, 4] } as unknown as RefDataset);
+    const many = file('many.json', JSON.stringify({ datasets: all }));
+    const report = { BELLWETHER_THREADS_REPORT: '1' };
+    const one = await fit([many], { ...report, BELLWETHER_THREADS: '1' });
+    const three = await fit([many], { ...report, BELLWETHER_THREADS: '3' });
+    expect(one.code).toBe(0);
+    expect(three.code).toBe(0);
+    expect(one.stderr).toMatch(/^threads=1 chunks=25 chunks_by_workers=0\n$/);
+    // the workers did part of the work (how much depends on the machine)
+    const byWorkers = Number(/^threads=3 chunks=25 chunks_by_workers=(\d+)\n$/.exec(three.stderr)?.[1]);
+    expect(byWorkers).toBeGreaterThan(0);
+    expect(three.stdout).toBe(one.stdout);
+    const ids = (JSON.parse(one.stdout).results as { id: string }[]).map((r) => r.id);
+    expect(ids).toEqual(all.map((d) => d.id));
   });
 });

@@ -13,7 +13,7 @@ interface Run {
 
 function bellwether(...args: string[]): Promise<Run> {
   return new Promise((resolve, reject) => {
-    const child = spawn('npx', ['tsx', 'server/cli/index.ts', ...args], {
+    const child = spawn(process.execPath, ['bin/bellwether.js', ...args], {
       cwd: process.cwd(),
       env: { ...process.env, NO_COLOR: '1' },
     });
