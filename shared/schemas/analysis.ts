@@ -33,11 +33,26 @@ export type StudyAnalysisSettings = z.infer<typeof analysisSettingsSchema>;
 
 export const settingsSaveSchema = z.object({ version: z.int().min(1), settings: analysisSettingsSchema });
 
-export const exclusionCreateSchema = z.object({
-  plateId: idSchema,
-  wells: z.array(wellName).min(1, 'Pick at least one well.').max(384),
-  reason: text(1000, 'Reason'),
-});
+/** One plate's wells, `{ plateId, wells: ['A1', …] }`, is taken as the list form below. */
+function onePlateToList(raw: unknown): unknown {
+  if (raw === null || typeof raw !== 'object') return raw;
+  const { plateId, wells, ...rest } = raw as Record<string, unknown>;
+  if (typeof plateId !== 'string' || !Array.isArray(wells) || !wells.every((w) => typeof w === 'string')) return raw;
+  return { ...rest, wells: wells.map((well) => ({ plateId, well })) };
+}
+
+/** Wells to exclude, from one or several plates of the study, with one reason: kept all or none. */
+export const exclusionCreateSchema = z.preprocess(
+  onePlateToList,
+  z.object({
+    wells: z
+      .array(z.object({ plateId: idSchema, well: wellName }))
+      .min(1, 'Pick at least one well.')
+      .max(4 * 384, 'At most 1,536 wells at once.'),
+    reason: text(1000, 'Reason'),
+  }),
+);
+export type ExclusionCreate = z.infer<typeof exclusionCreateSchema>;
 
 export const exclusionLiftSchema = z.object({ reason: text(1000, 'Reason') });
 

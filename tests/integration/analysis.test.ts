@@ -83,6 +83,31 @@ describe('analysis of the generated kinetic study', () => {
     expect((lifted.body as StudyAnalysis).inputHash).toBe(before.inputHash);
   });
 
+  it('when wells of two plates are excluded in one request, then all are kept or, if one is wrong, none', async () => {
+    const twoPlates = await t.db.select().from(plates).where(eq(plates.studyId, kineticStudyId)).orderBy(plates.createdAt).limit(2);
+    const [first, second] = twoPlates;
+    const activeOn = async () =>
+      ((await scientist.agent.get(`/api/studies/${kineticStudyId}/analysis`).expect(200)).body as StudyAnalysis).exclusions.filter((e) => !e.liftedAt);
+    const before = await activeOn();
+    const reason = 'Plate sealed late; evaporation suspected in the edge wells.';
+    // A9 of the first plate is mapped; P24 does not exist on a 96-well map: nothing may be kept.
+    const refused = await send(scientist, 'post', `/api/studies/${kineticStudyId}/exclusions`, {
+      wells: [{ plateId: first.id, well: 'A9' }, { plateId: second.id, well: 'P24' }],
+      reason,
+    });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.message).toBe(`P24 of ${second.name} has no role in the plate map.`);
+    expect(await activeOn()).toHaveLength(before.length);
+
+    const res = await send(scientist, 'post', `/api/studies/${kineticStudyId}/exclusions`, {
+      wells: [{ plateId: first.id, well: 'A9' }, { plateId: second.id, well: 'A9' }],
+      reason,
+    }).expect(201);
+    const added = (res.body as StudyAnalysis).exclusions.filter((e) => !e.liftedAt && e.reason === reason);
+    expect(added.map((e) => [e.plateId, e.well]).sort()).toEqual([[first.id, 'A9'], [second.id, 'A9']].sort());
+    for (const e of added) await send(scientist, 'post', `/api/exclusions/${e.id}/lift`, { reason: 'Seal was in time after all.' }).expect(200);
+  });
+
   it('when a window is set for one well, then that well uses it and the others keep the automatic window', async () => {
     const current = (await scientist.agent.get(`/api/studies/${kineticStudyId}/analysis`).expect(200)).body as StudyAnalysis;
     const [plate] = await t.db.select().from(plates).where(eq(plates.studyId, kineticStudyId)).orderBy(plates.createdAt).limit(1);

@@ -45,7 +45,7 @@ export const demoStudies: DemoStudy[] = [
     finish: async (ctx, id) => {
       const owner = await person(ctx.db, 'scientist@example.org');
       const [plate] = await ctx.db.select().from(plates).where(eq(plates.studyId, id)).orderBy(asc(plates.createdAt)).limit(1);
-      await excludeWells(ctx.db, owner, id, { plateId: plate.id, wells: ['B6'], reason: 'Trace rises 1.8 times faster than its replicates; a bubble was noted at the first read (demo, generated outlier).' });
+      await excludeWells(ctx.db, owner, id, { wells: [{ plateId: plate.id, well: 'B6' }], reason: 'Trace rises 1.8 times faster than its replicates; a bubble was noted at the first read (demo, generated outlier).' });
     },
   },
   {

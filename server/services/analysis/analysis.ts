@@ -4,7 +4,7 @@
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { analyseStudy, type AnalysisResult, type VariantProfile } from '../../../shared/analysis';
 import type { BootstrapSummary } from '../../../shared/fitting';
-import type { AnalysisJob, ExclusionView, RecomputeComparison, StudyAnalysis, StudyAnalysisSettings } from '../../../shared/schemas/analysis';
+import type { AnalysisJob, ExclusionCreate, ExclusionView, RecomputeComparison, StudyAnalysis, StudyAnalysisSettings } from '../../../shared/schemas/analysis';
 import type { DesignedSeries } from '../../../shared/schemas/buffer-series';
 import type { Db, DbOrTx } from '../../db/client';
 import { analysisJobs, analysisRuns, analysisSettings, bufferSeries, exclusions, plates, preparations, profileFits, reads, studies, studyVariants, users } from '../../db/schema';
@@ -216,26 +216,41 @@ export async function saveSettings(db: Db, user: CurrentUser, studyId: string, v
   return getAnalysis(db, user, studyId);
 }
 
-export async function excludeWells(db: Db, user: CurrentUser, studyId: string, input: { plateId: string; wells: string[]; reason: string }) {
+/** Excludes wells of one or several plates of the study with one reason, in one transaction. */
+export async function excludeWells(db: Db, user: CurrentUser, studyId: string, input: ExclusionCreate) {
   await db.transaction(async (tx) => {
     const study = await loadEditableStudy(tx, user, studyId);
-    const plate = await loadVisible(tx, plates, input.plateId, user, 'That plate');
-    if (plate.studyId !== studyId) throw badRequest('That plate belongs to another study.', { plateId: 'Pick a plate of this study.' });
-    const mapped = (plate.map as { wells: Record<string, unknown> }).wells;
-    const unmapped = input.wells.filter((w) => !(w in mapped));
-    if (unmapped.length) throw badRequest(`${unmapped.join(', ')} ${unmapped.length === 1 ? 'has' : 'have'} no role in the plate map.`, { wells: unmapped.join(', ') });
-    const activeAlready = new Set(
-      (await tx.select().from(exclusions).where(and(eq(exclusions.plateId, input.plateId), inArray(exclusions.well, input.wells)))).filter((e) => !e.liftedAt).map((e) => e.well),
-    );
-    const toAdd = input.wells.filter((w) => !activeAlready.has(w));
-    if (toAdd.length === 0) throw conflict('Those wells are already excluded.', 'already_excluded');
-    const rows = await tx
-      .insert(exclusions)
-      .values(toAdd.map((well) => ({ teamId: study.teamId, studyId, plateId: input.plateId, well, reason: input.reason, createdBy: user.id })))
-      .returning();
-    for (const row of rows) {
-      await writeAudit(tx, { actorId: user.id, teamId: study.teamId, entity: 'exclusion', entityId: row.id, action: 'exclude', after: { studyId, plateId: row.plateId, plateName: plate.name, well: row.well, reason: row.reason } });
+    const byPlate = new Map<string, string[]>();
+    for (const { plateId, well } of input.wells) {
+      const list = byPlate.get(plateId) ?? [];
+      if (!list.includes(well)) list.push(well);
+      byPlate.set(plateId, list);
     }
+    let added = 0;
+    for (const [plateId, wells] of byPlate) {
+      const plate = await loadVisible(tx, plates, plateId, user, 'That plate');
+      if (plate.studyId !== studyId) throw badRequest('That plate belongs to another study.', { plateId: 'Pick a plate of this study.' });
+      const mapped = (plate.map as { wells: Record<string, unknown> }).wells;
+      const unmapped = wells.filter((w) => !(w in mapped));
+      if (unmapped.length) {
+        const where = byPlate.size > 1 ? ` of ${plate.name}` : '';
+        throw badRequest(`${unmapped.join(', ')}${where} ${unmapped.length === 1 ? 'has' : 'have'} no role in the plate map.`, { wells: unmapped.join(', ') });
+      }
+      const activeAlready = new Set(
+        (await tx.select().from(exclusions).where(and(eq(exclusions.plateId, plateId), inArray(exclusions.well, wells)))).filter((e) => !e.liftedAt).map((e) => e.well),
+      );
+      const toAdd = wells.filter((w) => !activeAlready.has(w));
+      if (toAdd.length === 0) continue;
+      const rows = await tx
+        .insert(exclusions)
+        .values(toAdd.map((well) => ({ teamId: study.teamId, studyId, plateId, well, reason: input.reason, createdBy: user.id })))
+        .returning();
+      added += rows.length;
+      for (const row of rows) {
+        await writeAudit(tx, { actorId: user.id, teamId: study.teamId, entity: 'exclusion', entityId: row.id, action: 'exclude', after: { studyId, plateId: row.plateId, plateName: plate.name, well: row.well, reason: row.reason } });
+      }
+    }
+    if (added === 0) throw conflict('Those wells are already excluded.', 'already_excluded');
   });
   return getAnalysis(db, user, studyId);
 }

@@ -1,14 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { StudyAnalysis } from '@shared/schemas/analysis';
+import type { ExclusionCreate, StudyAnalysis } from '@shared/schemas/analysis';
 import { api } from '@/lib/api-client';
 import { analysisKeys } from './keys';
 
-export type ExclusionRequest = { studyId: string; plateId: string; wells: string[]; reason: string };
+export type ExclusionRequest = { studyId: string } & ExclusionCreate;
 
 export const excludeWells = ({ studyId, ...body }: ExclusionRequest) =>
   api.post<StudyAnalysis>(`/studies/${encodeURIComponent(studyId)}/exclusions`, body);
 
-/** Excludes wells with a reason; the answer is the refitted analysis. */
+/** Excludes wells (of one or several plates) with a reason; the answer is the refitted analysis. */
 export function useExcludeWells(options: { onSuccess?: (analysis: StudyAnalysis) => void } = {}) {
   const queryClient = useQueryClient();
   return useMutation({

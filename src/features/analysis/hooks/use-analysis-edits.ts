@@ -17,13 +17,9 @@ export function useAnalysisEdits(analysis: StudyAnalysis) {
       { studyId: analysis.studyId, version: analysis.settingsVersion, settings },
       { onSuccess: () => toast.show(`${done} The profiles were refitted.`) },
     );
-  /** Wells of several plates go as one request per plate; the last answer is the newest analysis. */
+  /** Wells of one or several plates in one request: all are excluded, or none. */
   const excludeWells = async (wells: { plateId: string; well: string }[], reason: string) => {
-    const byPlate = new Map<string, string[]>();
-    for (const w of wells) byPlate.set(w.plateId, [...(byPlate.get(w.plateId) ?? []), w.well]);
-    for (const [plateId, names] of byPlate) {
-      await exclude.mutateAsync({ studyId: analysis.studyId, plateId, wells: names, reason });
-    }
+    await exclude.mutateAsync({ studyId: analysis.studyId, wells, reason });
     toast.show(`${wells.map((w) => w.well).join(', ')} excluded; the profile was refitted.`);
   };
   const include = async (exclusionId: string, well: string, reason: string) => {
