@@ -10,7 +10,7 @@ export const cellName = (cell: Cell) => `${rowLetter(cell.row)}${cell.column + 1
 
 /** 'B7' → { row: 1, column: 6 }; null for anything that is not a well of the format. */
 export function cellOf(name: string, format: PlateFormat): Cell | null {
-  const m = /^([A-Pa-p])0?(\d{1,2})$/.exec(name.trim());
+  const m = /^([A-Pa-p])(\d{1,2})$/.exec(name.trim());
   if (!m) return null;
   const { rows, columns } = plateDimensions(format);
   const row = ROW_LETTERS.indexOf(m[1].toUpperCase());
