@@ -1,5 +1,5 @@
 // The plates of a study: the list, a new plate (empty, from a template or a copy), copying a
-// map into a new plate (here or in another study of the team) and deleting a plate.
+// map into a new plate (here or in another study of the team), renaming and deleting a plate.
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
@@ -17,6 +17,7 @@ import { getStudyContextQueryOptions, useStudyContext } from '@/features/plates/
 import { CopyPlateDialog } from '@/features/plates/components/copy-plate-dialog';
 import { NewPlateDialog } from '@/features/plates/components/new-plate-dialog';
 import { PlateList } from '@/features/plates/components/plate-list';
+import { RenamePlateDialog } from '@/features/plates/components/rename-plate-dialog';
 import { ReadOnlyNotice } from '@/features/plates/components/read-only-notice';
 import { useCan, warmCacheFor } from '@/lib/auth';
 
@@ -40,6 +41,7 @@ export default function StudyPlatesRoute() {
   const [creating, setCreating] = useState(false);
   const [copying, setCopying] = useState<PlateSummary | null>(null);
   const [deleting, setDeleting] = useState<PlateSummary | null>(null);
+  const [renaming, setRenaming] = useState<PlateSummary | null>(null);
   const remove = useDeletePlate({
     onSuccess: () => {
       toast.show(`Plate “${deleting?.name}” deleted.`);
@@ -85,6 +87,7 @@ export default function StudyPlatesRoute() {
           plateHref={plateHref}
           importHref={importHref}
           onCopy={editable ? setCopying : undefined}
+          onRename={editable ? setRenaming : undefined}
           onDelete={editable ? setDeleting : undefined}
         />
       </div>
@@ -106,6 +109,14 @@ export default function StudyPlatesRoute() {
           setCopying(null);
           toast.show(`Map copied into the new plate “${copy.name}”.`);
           if (copy.studyId === studyId) void navigate(plateHref(copy));
+        }}
+      />
+      <RenamePlateDialog
+        plate={renaming}
+        onClose={() => setRenaming(null)}
+        onRenamed={(name) => {
+          toast.show(`Plate “${renaming?.name}” renamed to “${name}”.`);
+          setRenaming(null);
         }}
       />
       <ConfirmDialog

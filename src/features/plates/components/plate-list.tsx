@@ -1,4 +1,4 @@
-// The study's plates: format, reads, version and last change; open, import, copy, delete.
+// The study's plates: format, reads, version and last change; open, import, rename, copy, delete.
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo, type ReactNode } from 'react';
 import { Link } from 'react-router';
@@ -15,11 +15,12 @@ export type PlateListProps = {
   importHref: (plate: PlateSummary) => string;
   /** Given only when the plates may change (role and study status). */
   onCopy?: (plate: PlateSummary) => void;
+  onRename?: (plate: PlateSummary) => void;
   onDelete?: (plate: PlateSummary) => void;
   toolbar?: ReactNode;
 };
 
-export function PlateList({ plates, plateHref, importHref, onCopy, onDelete, toolbar }: PlateListProps) {
+export function PlateList({ plates, plateHref, importHref, onCopy, onRename, onDelete, toolbar }: PlateListProps) {
   const columns = useMemo(
     () => [
       column.accessor('name', {
@@ -51,6 +52,11 @@ export function PlateList({ plates, plateHref, importHref, onCopy, onDelete, too
                 Import<span className="sr-only"> a reader file into {row.original.name}</span>
               </Link>
             )}
+            {onRename && (
+              <Button size="sm" onClick={() => onRename(row.original)}>
+                Rename<span className="sr-only"> {row.original.name}</span>
+              </Button>
+            )}
             {onCopy && (
               <Button size="sm" onClick={() => onCopy(row.original)}>
                 Copy map<span className="sr-only"> of {row.original.name}</span>
@@ -65,7 +71,7 @@ export function PlateList({ plates, plateHref, importHref, onCopy, onDelete, too
         ),
       }),
     ],
-    [plateHref, importHref, onCopy, onDelete],
+    [plateHref, importHref, onCopy, onRename, onDelete],
   );
   return (
     <DataTable

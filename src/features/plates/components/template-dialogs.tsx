@@ -1,4 +1,5 @@
-// Templates: save the current map under a name for the team; start this map from a template.
+// Templates: save the current map under a name for the team; start this map from a template;
+// delete a template the team no longer uses.
 import { useState } from 'react';
 import type { PlateMap } from '@shared/plate-map/schema';
 import { Button } from '@/components/ui/button';
@@ -9,6 +10,7 @@ import { Loading } from '@/components/ui/spinner';
 import { useToast } from '@/components/ui/toast';
 import { formatDate } from '@/lib/format';
 import { useCreateTemplate } from '../api/create-template';
+import { useDeleteTemplate } from '../api/delete-template';
 import { useTemplates } from '../api/get-templates';
 
 type Common = { open: boolean; onClose: () => void; teamId: string; format: 96 | 384 };
@@ -65,9 +67,23 @@ export function ApplyTemplateDialog({
   format,
   onApply,
 }: Common & { onApply: (map: PlateMap, name: string) => void }) {
+  const toast = useToast();
   const templates = useTemplates(teamId, format, { enabled: open });
   const [chosen, setChosen] = useState<string | null>(null);
+  const [confirming, setConfirming] = useState(false);
   const template = templates.data?.find((t) => t.id === chosen);
+  const remove = useDeleteTemplate({
+    onSuccess: (t) => {
+      toast.show(`Template “${t.name}” deleted; plates made from it keep their maps.`);
+      setChosen(null);
+      setConfirming(false);
+    },
+  });
+  const choose = (id: string) => {
+    setChosen(id);
+    setConfirming(false);
+    remove.reset();
+  };
   return (
     <Dialog
       open={open}
@@ -76,6 +92,9 @@ export function ApplyTemplateDialog({
       description="The template replaces the whole map. Undo (Ctrl+Z) brings the current map back."
       footer={
         <>
+          <Button disabled={!template || confirming} onClick={() => setConfirming(true)}>
+            Delete template…
+          </Button>
           <Button onClick={onClose}>Cancel</Button>
           <Button
             variant="primary"
@@ -100,13 +119,27 @@ export function ApplyTemplateDialog({
       ) : (
         <fieldset className="space-y-1">
           <legend className="sr-only">Templates</legend>
+          {remove.error && <Notice tone="error">{remove.error.message}</Notice>}
+          {confirming && template && (
+            <Notice tone="warning" title={`Delete “${template.name}” for the whole team?`}>
+              <p>Plates already made from it keep their maps. This cannot be undone.</p>
+              <div className="mt-2 flex gap-2">
+                <Button size="sm" variant="primary" busy={remove.isPending} onClick={() => remove.mutate(template)}>
+                  Delete “{template.name}”
+                </Button>
+                <Button size="sm" onClick={() => setConfirming(false)}>
+                  Keep it
+                </Button>
+              </div>
+            </Notice>
+          )}
           {templates.data.map((t) => (
             <label key={t.id} className="flex items-baseline gap-2 rounded px-1 py-0.5 hover:bg-canvas">
               <input
                 type="radio"
                 name="template"
                 checked={chosen === t.id}
-                onChange={() => setChosen(t.id)}
+                onChange={() => choose(t.id)}
               />
               <span className="font-semibold">{t.name}</span>
               <span className="text-sm text-ink-muted">
