@@ -23,11 +23,12 @@ export type FillResult = { map: PlateMap; wells: number; pointsPlaced: number; p
 export function fillSeries(map: PlateMap, format: PlateFormat, input: FillSeriesInput): FillResult {
   const { rows, columns } = plateDimensions(format);
   const alongRow = input.direction === 'along-row';
-  const room = alongRow ? columns - input.start.column : rows - input.start.row;
-  const across = alongRow ? rows - input.start.row : columns - input.start.column;
+  // A start off the plate leaves no room (never a negative count of wells).
+  const room = Math.max(0, alongRow ? columns - input.start.column : rows - input.start.row);
+  const across = Math.max(0, alongRow ? rows - input.start.row : columns - input.start.column);
   const span = Math.max(1, Math.floor(input.span));
   const lines = Math.min(Math.max(1, Math.floor(input.lines)), across);
-  const fit = Math.min(input.points.length, Math.floor(room / span));
+  const fit = lines > 0 ? Math.min(input.points.length, Math.floor(room / span)) : 0;
   const patches = new Map<string, WellPatch>();
   for (let p = 0; p < fit; p++) {
     const { pH, buffer } = input.points[p];

@@ -22,8 +22,10 @@ export type PatternResult = { map: PlateMap; wells: number; linesNeeded: number;
 export function replicatePattern(map: PlateMap, format: PlateFormat, input: PatternInput): PatternResult {
   const { rows, columns } = plateDimensions(format);
   const byRows = input.direction === 'rows';
-  const linesAvailable = byRows ? rows - input.start.row : columns - input.start.column;
-  const bandRoom = byRows ? columns - input.start.column : rows - input.start.row;
+  // A start off the plate leaves no lines (a negative count would slice from the end and write
+  // wells beyond the last row or column).
+  const linesAvailable = Math.max(0, byRows ? rows - input.start.row : columns - input.start.column);
+  const bandRoom = Math.max(0, byRows ? columns - input.start.column : rows - input.start.row);
   const length = Math.min(Math.max(1, Math.floor(input.length)), bandRoom);
   const lines: WellPatch[] = [];
   for (const variantId of input.variantIds) {
