@@ -25,7 +25,13 @@ describe('the brush', () => {
 
   it('when every field is chosen, then the patch carries each of them', () => {
     expect(
-      brushPatch({ role: 'standard', variantId: WT, point: { pH: 6, buffer: 'mes' }, replicate: 3, concentrationUm: 0 }),
+      brushPatch({
+        role: 'standard',
+        variantId: WT,
+        point: { pH: 6, buffer: 'mes' },
+        replicate: 3,
+        concentrationUm: 0,
+      }),
     ).toEqual({ role: 'standard', variantId: WT, pH: 6, buffer: 'mes', replicate: 3, concentrationUm: 0 });
   });
 });

@@ -20,14 +20,16 @@ const mapOf = (wells: Record<string, WellAssignment>): PlateMap => ({ wells, rep
 describe('plate map edits: what a role keeps', () => {
   it('when a well is a blank or buffer-only well, then it holds no variant (no enzyme) but keeps pH and replicate', () => {
     for (const role of ['blank', 'buffer'] as const) {
-      expect(normalise(well({ role, variantId: WT, pH: 5, buffer: 'mes', replicate: 2, concentrationUm: 10 }))).toEqual(
-        well({ role, pH: 5, buffer: 'mes', replicate: 2 }),
-      );
+      expect(
+        normalise(well({ role, variantId: WT, pH: 5, buffer: 'mes', replicate: 2, concentrationUm: 10 })),
+      ).toEqual(well({ role, pH: 5, buffer: 'mes', replicate: 2 }));
     }
   });
 
   it('when a well is a sample, then it keeps its variant and loses any concentration', () => {
-    expect(normalise(well({ variantId: WT, concentrationUm: 50, pH: 6 }))).toEqual(well({ variantId: WT, pH: 6 }));
+    expect(normalise(well({ variantId: WT, concentrationUm: 50, pH: 6 }))).toEqual(
+      well({ variantId: WT, pH: 6 }),
+    );
   });
 
   it('when a well is a standard, then it keeps its concentration and loses any variant', () => {
@@ -38,7 +40,9 @@ describe('plate map edits: what a role keeps', () => {
 
   it('when a well is unused, then it keeps nothing but its role', () => {
     expect(
-      normalise(well({ role: 'unused', variantId: WT, pH: 5, buffer: 'mes', replicate: 1, concentrationUm: 3 })),
+      normalise(
+        well({ role: 'unused', variantId: WT, pH: 5, buffer: 'mes', replicate: 1, concentrationUm: 3 }),
+      ),
     ).toEqual(well({ role: 'unused' }));
   });
 });

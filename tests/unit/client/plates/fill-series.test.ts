@@ -10,8 +10,18 @@ const point = (pH: number): PhPoint => {
 };
 const series = (...pHs: number[]) => pHs.map(point);
 
-const fill = (input: Partial<FillSeriesInput> & Pick<FillSeriesInput, 'points'>, map = emptyPlateMap(), format: 96 | 384 = 96) =>
-  fillSeries(map, format, { start: { row: 0, column: 0 }, direction: 'along-row', span: 1, lines: 1, ...input });
+const fill = (
+  input: Partial<FillSeriesInput> & Pick<FillSeriesInput, 'points'>,
+  map = emptyPlateMap(),
+  format: 96 | 384 = 96,
+) =>
+  fillSeries(map, format, {
+    start: { row: 0, column: 0 },
+    direction: 'along-row',
+    span: 1,
+    lines: 1,
+    ...input,
+  });
 
 const pHs = (map: PlateMap, names: string[]) => names.map((n) => map.wells[n]?.pH ?? null);
 
@@ -30,7 +40,12 @@ describe('fill pH series along a row', () => {
   it('when each point spans two wells over three rows, then every pH takes a 3 × 2 block', () => {
     const r = fill({ start: { row: 1, column: 1 }, points: series(4, 5, 6), span: 2, lines: 3 });
     for (const row of ['B', 'C', 'D']) {
-      expect(pHs(r.map, [2, 3, 4, 5, 6, 7].map((c) => `${row}${c}`))).toEqual([4, 4, 5, 5, 6, 6]);
+      expect(
+        pHs(
+          r.map,
+          [2, 3, 4, 5, 6, 7].map((c) => `${row}${c}`),
+        ),
+      ).toEqual([4, 4, 5, 5, 6, 6]);
     }
     expect(r.map.wells.A2).toBeUndefined();
     expect(r.map.wells.E2).toBeUndefined();
@@ -76,7 +91,12 @@ describe('fill pH series down a column', () => {
   });
 
   it('when the column runs out, then the points that did not fit are counted', () => {
-    const r = fill({ direction: 'down-column', start: { row: 5, column: 11 }, points: series(4, 5, 6, 7), lines: 4 });
+    const r = fill({
+      direction: 'down-column',
+      start: { row: 5, column: 11 },
+      points: series(4, 5, 6, 7),
+      lines: 4,
+    });
     expect(pHs(r.map, ['F12', 'G12', 'H12'])).toEqual([4, 5, 6]);
     // Only one column remains to the right of column 12.
     expect(r).toMatchObject({ wells: 3, pointsPlaced: 3, pointsLeftOut: 1 });

@@ -42,7 +42,8 @@ describe('plate editor grid: well names', () => {
   });
 
   it('when a name is malformed, then it is not a well', () => {
-    for (const name of ['', '1A', 'AA1', 'A', 'A1.5', 'A-1', 'A100', 'A1B']) expect(cellOf(name, 384)).toBeNull();
+    for (const name of ['', '1A', 'AA1', 'A', 'A1.5', 'A-1', 'A100', 'A1B'])
+      expect(cellOf(name, 384)).toBeNull();
   });
 
   it('when a name has more than two digits, then the editor refuses it as the shared well parser does', () => {
@@ -67,7 +68,21 @@ describe('plate editor grid: rectangles and bounds', () => {
   it('when the whole plate is listed, then 96 and 384 wells come row by row from A1', () => {
     const n96 = allNames(96);
     expect(n96).toHaveLength(96);
-    expect(n96.slice(0, 13)).toEqual(['A1', 'A2', 'A3', 'A4', 'A5', 'A6', 'A7', 'A8', 'A9', 'A10', 'A11', 'A12', 'B1']);
+    expect(n96.slice(0, 13)).toEqual([
+      'A1',
+      'A2',
+      'A3',
+      'A4',
+      'A5',
+      'A6',
+      'A7',
+      'A8',
+      'A9',
+      'A10',
+      'A11',
+      'A12',
+      'B1',
+    ]);
     expect(n96.at(-1)).toBe('H12');
     const n384 = allNames(384);
     expect(n384).toHaveLength(384);
@@ -92,13 +107,22 @@ describe('plate editor grid: rectangles and bounds', () => {
   });
 
   it('when bounds are taken, then they are the smallest rectangle around the wells, whatever their order', () => {
-    expect(boundsOf(['C5', 'A9', 'F2'], 96)).toEqual({ top: { row: 0, column: 1 }, bottom: { row: 5, column: 8 } });
-    expect(boundsOf(new Set(['D4']), 96)).toEqual({ top: { row: 3, column: 3 }, bottom: { row: 3, column: 3 } });
+    expect(boundsOf(['C5', 'A9', 'F2'], 96)).toEqual({
+      top: { row: 0, column: 1 },
+      bottom: { row: 5, column: 8 },
+    });
+    expect(boundsOf(new Set(['D4']), 96)).toEqual({
+      top: { row: 3, column: 3 },
+      bottom: { row: 3, column: 3 },
+    });
   });
 
   it('when no name is a well of the format, then there are no bounds; names off the plate are skipped', () => {
     expect(boundsOf([], 96)).toBeNull();
     expect(boundsOf(['P24', 'nonsense'], 96)).toBeNull();
-    expect(boundsOf(['B2', 'P24'], 96)).toEqual({ top: { row: 1, column: 1 }, bottom: { row: 1, column: 1 } });
+    expect(boundsOf(['B2', 'P24'], 96)).toEqual({
+      top: { row: 1, column: 1 },
+      bottom: { row: 1, column: 1 },
+    });
   });
 });

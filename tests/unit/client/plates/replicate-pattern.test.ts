@@ -45,8 +45,10 @@ describe('replicate pattern down rows', () => {
 
   it('when a blank line and a buffer line are asked for, then rows G and H take them, without a variant', () => {
     const r = lay({ blankLine: true, bufferLine: true });
-    for (const w of rowOf(r.map, 'G')) expect(w).toMatchObject({ role: 'blank', variantId: null, replicate: 1 });
-    for (const w of rowOf(r.map, 'H')) expect(w).toMatchObject({ role: 'buffer', variantId: null, replicate: 1 });
+    for (const w of rowOf(r.map, 'G'))
+      expect(w).toMatchObject({ role: 'blank', variantId: null, replicate: 1 });
+    for (const w of rowOf(r.map, 'H'))
+      expect(w).toMatchObject({ role: 'buffer', variantId: null, replicate: 1 });
     expect(r.wells).toBe(96);
     expect(Object.keys(r.map.wells).sort()).toEqual(allNames(96).sort());
   });
