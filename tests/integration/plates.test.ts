@@ -5,6 +5,7 @@ import path from 'node:path';
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditLog, readerFiles, reads, studies, wellRecords } from '../../server/db/schema';
+import { parseReaderFile } from '../../server/import';
 import { startTestApp, type TestApp } from './helpers/app';
 import { createTeam, createUser } from './helpers/factories';
 import { createStudyWorld } from './helpers/records';
@@ -153,6 +154,33 @@ describe('reader files', () => {
     expect(new Set(flagged.map((r) => r.flag))).toEqual(new Set(Object.values(preview.body.blocks[0].flags)));
     const summary = await scientist.agent.get(`/api/plates/${plate.id}/reads`).expect(200);
     expect(summary.body[0].missingCount).toBe(flagged.length);
+  });
+
+  it('when a time course with missing points and a plate with flagged wells are imported, then every stored well holds exactly what the parser read', async () => {
+    const stored = async (name: string, type: 'kinetic' | 'endpoint') => {
+      const { plate } = await newPlate(name.includes('384') ? 384 : 96);
+      const bytes = fs.readFileSync(fixture(name));
+      const imported = await scientist.agent.post(`/api/plates/${plate.id}/reads`).set('X-CSRF-Token', scientist.csrf).field('selection', JSON.stringify([{ type, blockIndex: 0 }])).attach('file', bytes, name).expect(201);
+      const rows = await t.db.select().from(wellRecords).where(eq(wellRecords.readId, imported.body.readIds[0]));
+      const parsed = await parseReaderFile(bytes, name);
+      if (!parsed.ok) throw new Error(parsed.error.message);
+      return { rows: new Map(rows.map((r) => [r.well, r])), block: parsed.value.blocks[0] };
+    };
+
+    const kinetic = await stored('kinetic-minutes-a01.xlsx', 'kinetic');
+    if (kinetic.block.kind !== 'kinetic') throw new Error('the fixture holds a time course');
+    expect(kinetic.rows.size).toBe(Object.keys(kinetic.block.wells).length);
+    expect(Object.keys(kinetic.block.detail.points).length).toBeGreaterThan(0);
+    for (const [well, values] of Object.entries(kinetic.block.wells)) {
+      expect(kinetic.rows.get(well)).toEqual({ readId: expect.any(String), well, value: null, values, flag: kinetic.block.flags[well] ?? null, pointFlags: kinetic.block.detail.points[well] ?? null });
+    }
+
+    const endpoint = await stored('endpoint-384-flags.xlsx', 'endpoint');
+    if (endpoint.block.kind !== 'endpoint') throw new Error('the fixture holds a plate grid');
+    expect(endpoint.rows.size).toBe(384);
+    for (const [well, value] of Object.entries(endpoint.block.wells)) {
+      expect(endpoint.rows.get(well)).toEqual({ readId: expect.any(String), well, value, values: null, flag: endpoint.block.flags[well] ?? null, pointFlags: null });
+    }
   });
 
   it('when a file holds nothing a reader writes, then the answer says what was looked for and nothing is stored', async () => {

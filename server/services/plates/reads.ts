@@ -5,7 +5,7 @@ import { createHash } from 'node:crypto';
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import type { BlockPreview, ImportPreview, ReadData, ReadSummary } from '../../../shared/schemas/plates-types';
 import type { ImportSelection } from '../../../shared/schemas/plates';
-import type { Db } from '../../db/client';
+import type { Db, Tx } from '../../db/client';
 import { plates, readerFiles, reads, users, wellRecords } from '../../db/schema';
 import { AppError, badRequest, conflict } from '../../errors';
 import { parseReaderFile, type ParsedBlock, type ParsedReaderFile } from '../../import';
@@ -135,6 +135,32 @@ function buildReads(parsed: ParsedReaderFile, selection: ImportSelection, plateF
   });
 }
 
+/**
+ * `{0.1,null,0.3}`: the array literal PostgreSQL reads. JSON.stringify writes each number as its
+ * shortest round-trip form (as String() does, several times faster than join for 46 000 numbers);
+ * the parser only hands on finite numbers, and PostgreSQL reads `null` as a missing element.
+ */
+const floatArray = (values: readonly (number | null)[]) => `{${JSON.stringify(values).slice(1, -1)}}`;
+
+/**
+ * Every well of one read in one statement: each column travels as one array parameter and unnest
+ * pairs them up again, row by row (a multi-row VALUES list would need six parameters per well).
+ * The kinetic series go as a text array of array literals, each cast to float8[] on its row.
+ */
+async function insertWells(tx: Tx, readId: string, wells: WellRow[]) {
+  if (wells.length === 0) return;
+  const series = `{${wells.map((w) => (w.values ? `"${floatArray(w.values)}"` : 'NULL')).join(',')}}`;
+  await tx.insert(wellRecords).select(sql`
+    select ${readId}::uuid, w.well, w.value, w.series::float8[], w.flag, w.point_flags::jsonb
+    from unnest(
+      ${sql.param(wells.map((w) => w.well))}::text[],
+      ${floatArray(wells.map((w) => w.value ?? null))}::float8[],
+      ${series}::text[],
+      ${sql.param(wells.map((w) => w.flag ?? null))}::text[],
+      ${sql.param(wells.map((w) => (w.pointFlags ? JSON.stringify(w.pointFlags) : null)))}::text[]
+    ) as w(well, value, series, flag, point_flags)`);
+}
+
 export async function importReads(db: Db, user: CurrentUser, plateId: string, upload: Upload, selection: ImportSelection, contentType: string) {
   const parsed = await parseOrRefuse(upload);
   const hash = sha256(upload.bytes);
@@ -151,9 +177,7 @@ export async function importReads(db: Db, user: CurrentUser, plateId: string, up
     for (const { read, wells } of built) {
       const [row] = await tx.insert(reads).values({ ...read, teamId: plate.teamId, plateId, fileId: file.id }).returning({ id: reads.id });
       created.push(row.id);
-      for (let i = 0; i < wells.length; i += 400) {
-        await tx.insert(wellRecords).values(wells.slice(i, i + 400).map((w) => ({ ...w, readId: row.id })));
-      }
+      await insertWells(tx, row.id, wells);
     }
     await tx.update(plates).set({ updatedAt: new Date() }).where(eq(plates.id, plateId));
     await writeAudit(tx, {
