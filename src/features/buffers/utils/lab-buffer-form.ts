@@ -103,8 +103,10 @@ export const emptyLabBuffer = (): LabBufferValues => ({
 
 /** A lower-case id from a name: "Sodium glycinate" → "sodium-glycinate". */
 export function slugOf(name: string): string {
+  // NFKD splits "é" into "e" and a combining accent; the accent goes, not the letter after it.
   return name
     .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
     .toLowerCase()
     .replace(/[^a-z0-9]+/g, '-')
     .replace(/^-+|-+$/g, '')
@@ -162,6 +164,15 @@ export function toSystem(v: LabBufferValues): BufferSystemInput {
   };
 }
 
+/**
+ * The default useful range (pKa ± 1, credited to common practice) opens as "not given", so that
+ * saving unchanged keeps its source instead of crediting it to the pKa's source.
+ */
+const isDefaultRange = (ion: BufferSystem['ionizations'][number]) =>
+  ion.sources.usefulRange === USEFUL_RANGE_SOURCE &&
+  ion.usefulRange[0] === round4(ion.pKa25 - 1) &&
+  ion.usefulRange[1] === round4(ion.pKa25 + 1);
+
 /** Form values from a saved lab system (for editing). */
 export function fromSystem(s: BufferSystem): LabBufferValues {
   return {
@@ -180,8 +191,8 @@ export function fromSystem(s: BufferSystem): LabBufferValues {
       dpKadT: ion.dpKadT,
       temperatureModel: ion.temperatureModel,
       roy: ion.roy ?? emptyIonization().roy,
-      usefulLow: ion.usefulRange[0],
-      usefulHigh: ion.usefulRange[1],
+      usefulLow: isDefaultRange(ion) ? null : ion.usefulRange[0],
+      usefulHigh: isDefaultRange(ion) ? null : ion.usefulRange[1],
       sources: {
         row: ion.sources.row,
         pKa25: ion.sources.pKa25,
