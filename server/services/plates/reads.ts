@@ -161,21 +161,44 @@ async function insertWells(tx: Tx, readId: string, wells: WellRow[]) {
     ) as w(well, value, series, flag, point_flags)`);
 }
 
+type Settled<T> = { ok: true; value: T } | { ok: false; error: unknown };
+const settle = <T>(promise: Promise<T>): Promise<Settled<T>> =>
+  promise.then(
+    (value) => ({ ok: true, value }),
+    (error: unknown) => ({ ok: false, error }),
+  );
+const unwrap = <T>(settled: Settled<T>): T => {
+  if (!settled.ok) throw settled.error;
+  return settled.value;
+};
+
+/** The plate (editable by this user) and the raw file, unless this plate already has the very same file. */
+async function storeRawFile(tx: Tx, user: CurrentUser, plateId: string, upload: Upload, hash: string, contentType: string) {
+  const { plate } = await loadEditablePlate(tx, user, plateId);
+  const duplicate = (await tx.$count(readerFiles, and(eq(readerFiles.plateId, plateId), eq(readerFiles.sha256, hash)))) > 0;
+  if (duplicate) return { plate, fileId: null };
+  const [file] = await tx
+    .insert(readerFiles)
+    .values({ teamId: plate.teamId, plateId, fileName: upload.fileName, sizeBytes: upload.bytes.length, sha256: hash, contentType, content: upload.bytes, uploadedBy: user.id })
+    .returning({ id: readerFiles.id });
+  return { plate, fileId: file.id };
+}
+
 export async function importReads(db: Db, user: CurrentUser, plateId: string, upload: Upload, selection: ImportSelection, contentType: string) {
-  const parsed = await parseOrRefuse(upload);
   const hash = sha256(upload.bytes);
+  // Node parses the file while PostgreSQL, on the other core, checks the plate and stores the raw
+  // bytes. The answer is the one the steps in turn would give: a parse error first, then the
+  // plate's, then the selection's, then the duplicate; any of them rolls the stored file back.
+  const parsing = settle(parseOrRefuse(upload));
   return db.transaction(async (tx) => {
-    const { plate } = await loadEditablePlate(tx, user, plateId);
+    const stored = await settle(storeRawFile(tx, user, plateId, upload, hash, contentType));
+    const parsed = unwrap(await parsing);
+    const { plate, fileId } = unwrap(stored);
     const built = buildReads(parsed, selection, plate.format);
-    const again = await tx.$count(readerFiles, and(eq(readerFiles.plateId, plateId), eq(readerFiles.sha256, hash)));
-    if (again > 0) throw conflict('This very file was already imported into this plate.', 'duplicate_file');
-    const [file] = await tx
-      .insert(readerFiles)
-      .values({ teamId: plate.teamId, plateId, fileName: upload.fileName, sizeBytes: upload.bytes.length, sha256: hash, contentType, content: upload.bytes, uploadedBy: user.id })
-      .returning({ id: readerFiles.id });
+    if (fileId === null) throw conflict('This very file was already imported into this plate.', 'duplicate_file');
     const created: string[] = [];
     for (const { read, wells } of built) {
-      const [row] = await tx.insert(reads).values({ ...read, teamId: plate.teamId, plateId, fileId: file.id }).returning({ id: reads.id });
+      const [row] = await tx.insert(reads).values({ ...read, teamId: plate.teamId, plateId, fileId }).returning({ id: reads.id });
       created.push(row.id);
       await insertWells(tx, row.id, wells);
     }
@@ -184,11 +207,11 @@ export async function importReads(db: Db, user: CurrentUser, plateId: string, up
       actorId: user.id,
       teamId: plate.teamId,
       entity: 'reader-file',
-      entityId: file.id,
+      entityId: fileId,
       action: 'import',
       after: { plateId, fileName: upload.fileName, sha256: hash, sizeBytes: upload.bytes.length, reads: built.map((b, i) => ({ id: created[i], ...b.read, wells: b.wells.length })) },
     });
-    return { fileId: file.id, readIds: created, sha256: hash };
+    return { fileId, readIds: created, sha256: hash };
   });
 }
 
