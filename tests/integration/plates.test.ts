@@ -208,6 +208,27 @@ describe('reader files', () => {
     expect(await t.db.$count(reads, eq(reads.plateId, plate.id))).toBe(0);
   });
 
+  it('when an import fails for several reasons at once, then the file is named first, then the plate, then the duplicate, and nothing more is stored', async () => {
+    const post = (plateId: string, name: string, bytes: Buffer) =>
+      scientist.agent.post(`/api/plates/${plateId}/reads`).set('X-CSRF-Token', scientist.csrf).field('selection', JSON.stringify([{ type: 'kinetic', blockIndex: 0 }])).attach('file', bytes, name);
+    const kinetic = fs.readFileSync(fixture('kinetic-seconds.xlsx'));
+    const { world, plate } = await newPlate();
+    await post(plate.id, 'kinetic-seconds.xlsx', kinetic).expect(201);
+    const duplicate = await post(plate.id, 'again.xlsx', kinetic);
+    expect(duplicate.status).toBe(409);
+    expect(duplicate.body.error.code).toBe('duplicate_file');
+
+    await t.db.update(studies).set({ status: 'approved' }).where(eq(studies.id, world.study.id));
+    const unreadable = await post(plate.id, 'nothing-here.csv', fs.readFileSync(fixture('nothing-here.csv')));
+    expect(unreadable.status).toBe(400);
+    expect(unreadable.body.error.message).toMatch(/looked for/);
+    const frozen = await post(plate.id, 'again.xlsx', kinetic);
+    expect(frozen.status).toBe(409);
+    expect(frozen.body.error.code).toBe('study_locked');
+    expect(await t.db.$count(readerFiles, eq(readerFiles.plateId, plate.id))).toBe(1);
+    expect(await t.db.$count(reads, eq(reads.plateId, plate.id))).toBe(1);
+  });
+
   it('when several grids are successive reads, then they import as one time course', async () => {
     const { plate } = await newPlate();
     const bytes = fs.readFileSync(fixture('endpoint-96-multi.xlsx'));
