@@ -29,7 +29,15 @@ export function readTyped(text: string, variants: StudyVariant[], phPoints: PhPo
       const v = variants[n - 1];
       return v && Number.isInteger(n)
         ? { ok: true, patch: { role: 'sample', variantId: v.id }, said: v.name }
-        : { ok: false, message: `The study has variants 1 to ${variants.length}.` };
+        : {
+            ok: false,
+            message:
+              variants.length === 0
+                ? 'The study has no variants yet; add them on the study page.'
+                : variants.length === 1
+                  ? 'The study has one variant: type v1.'
+                  : `The study has variants 1 to ${variants.length}.`,
+          };
     }
     case 'c':
       return n >= 0 && n <= 1e7

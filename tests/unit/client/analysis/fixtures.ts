@@ -78,7 +78,7 @@ export const point = (pH: number, over: Partial<ProfilePoint> = {}): ProfilePoin
 export function profileOf(over: Partial<VariantProfile> = {}): VariantProfile {
   return {
     variantId: 'v-wt',
-    name: 'XynA wild type',
+    name: 'FR1-WT',
     isParent: true,
     isReference: true,
     points: [],

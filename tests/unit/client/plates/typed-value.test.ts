@@ -4,8 +4,8 @@ import { describeTyped, readTyped, typedStarts } from '@/features/plates/utils/t
 import { variantTag, variantTags } from '@/features/plates/utils/variant-tags';
 
 const variants: StudyVariant[] = [
-  { id: '00000000-0000-4000-8000-000000000001', name: 'XynA wild type', mutations: '', isParent: true },
-  { id: '00000000-0000-4000-8000-000000000002', name: 'XynA D92N', mutations: 'D92N', isParent: false },
+  { id: '00000000-0000-4000-8000-000000000001', name: 'FR1-WT', mutations: '', isParent: true },
+  { id: '00000000-0000-4000-8000-000000000002', name: 'FR1-D92N', mutations: 'D92N', isParent: false },
 ];
 const points: PhPoint[] = [
   { pH: 4.5, buffer: 'acetate', bufferName: 'Acetate' },
@@ -40,11 +40,16 @@ describe('values typed into the grid', () => {
     expect(read('v2')).toEqual({
       ok: true,
       patch: { role: 'sample', variantId: variants[1].id },
-      said: 'XynA D92N',
+      said: 'FR1-D92N',
     });
     for (const text of ['v0', 'v3', 'v1.5']) {
       expect(read(text)).toEqual({ ok: false, message: 'The study has variants 1 to 2.' });
     }
+    expect(readTyped('v2', variants.slice(0, 1), points)).toEqual({ ok: false, message: 'The study has one variant: type v1.' });
+    expect(readTyped('v1', [], points)).toEqual({
+      ok: false,
+      message: 'The study has no variants yet; add them on the study page.',
+    });
   });
 
   it('when c and a concentration is typed, then the well becomes a standard at that concentration', () => {
@@ -77,22 +82,22 @@ describe('variant tags in wells', () => {
 
   it('when a variant has mutations, then its tag is the first, with a count of the others', () => {
     expect(variantTag(variants[1])).toBe('D92N');
-    expect(variantTag({ ...variants[1], mutations: 'D92N / E35Q/ Y69F' })).toBe('D92N+2');
+    expect(variantTag({ ...variants[1], mutations: 'D92N / E228Q/ K301E' })).toBe('D92N+2');
   });
 
   it('when a variant has no mutations, then its tag is the end of its name, at most six characters', () => {
-    expect(variantTag({ id: 'x', name: 'XynA-library clone 17', mutations: ' ', isParent: false })).toBe(
+    expect(variantTag({ id: 'x', name: 'FR1-library clone 17', mutations: ' ', isParent: false })).toBe(
       '17',
     );
     expect(variantTag({ id: 'x', name: 'consensus', mutations: '', isParent: false })).toBe('consen');
   });
 
   it('when tags are for a 384-well plate and one is longer than four characters, then all show numbers', () => {
-    const three = [...variants, { id: 'c', name: 'XynA E35Q/Y69F', mutations: 'E35Q/Y69F', isParent: false }];
+    const three = [...variants, { id: 'c', name: 'FR1-E228Q/K301E', mutations: 'E228Q/K301E', isParent: false }];
     expect(variantTags(three, false)).toEqual({
       [variants[0].id]: 'WT',
       [variants[1].id]: 'D92N',
-      c: 'E35Q+1',
+      c: 'E228Q+1',
     });
     expect(variantTags(three, true)).toEqual({ [variants[0].id]: '1', [variants[1].id]: '2', c: '3' });
     expect(variantTags(variants, true)).toEqual({ [variants[0].id]: 'WT', [variants[1].id]: 'D92N' });

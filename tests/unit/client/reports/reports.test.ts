@@ -83,7 +83,7 @@ describe('report profile chart', () => {
     expect(curves).toEqual([
       {
         key: 'v-wt',
-        label: 'XynA wild type',
+        label: 'FR1-WT',
         approved: true,
         points: [{ pH: 5, mean: 0.55, sd: 0.03 }],
         curve: { pH: [5], v: [0.55], lower: [0.5], upper: [0.6] },
