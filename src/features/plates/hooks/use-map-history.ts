@@ -4,21 +4,22 @@
 import { useCallback, useReducer } from 'react';
 import type { PlateMap } from '@shared/plate-map/schema';
 
-const LIMIT = 200;
+/** Undo steps kept; older ones are dropped. */
+export const HISTORY_LIMIT = 200;
 
-type State = { map: PlateMap; past: PlateMap[]; future: PlateMap[]; saved: PlateMap; version: number };
-type Action =
+export type MapHistoryState = { map: PlateMap; past: PlateMap[]; future: PlateMap[]; saved: PlateMap; version: number };
+export type MapHistoryAction =
   | { type: 'edit'; map: PlateMap }
   | { type: 'undo' }
   | { type: 'redo' }
   | { type: 'load'; map: PlateMap; version: number }
   | { type: 'saved'; version: number; map: PlateMap };
 
-function reducer(state: State, action: Action): State {
+export function mapHistoryReducer(state: MapHistoryState, action: MapHistoryAction): MapHistoryState {
   switch (action.type) {
     case 'edit':
       if (action.map === state.map) return state;
-      return { ...state, map: action.map, past: [...state.past.slice(-(LIMIT - 1)), state.map], future: [] };
+      return { ...state, map: action.map, past: [...state.past.slice(-(HISTORY_LIMIT - 1)), state.map], future: [] };
     case 'undo': {
       const previous = state.past.at(-1);
       if (!previous) return state;
@@ -37,7 +38,7 @@ function reducer(state: State, action: Action): State {
 }
 
 export function useMapHistory(initial: PlateMap, version: number) {
-  const [state, dispatch] = useReducer(reducer, {
+  const [state, dispatch] = useReducer(mapHistoryReducer, {
     map: initial,
     past: [],
     future: [],
