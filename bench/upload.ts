@@ -9,8 +9,8 @@
 //   the same machine load and each pays in turn for the other's garbage, as in a running server;
 //   the first pair warms up and is reported apart. The ratio is median upload / median exceljs of
 //   the same runs (the median of the per-pair ratios is printed beside it). No forced collection
-//   before a run: after one V8 shrinks the heap and exceljs alone took twice as long, which would
-//   flatter the ratio.
+//   before a run: V8 then shrinks the heap, exceljs alone took about twice as long, and the ratio
+//   looked better than it is.
 // - memory: the peak resident memory (Linux VmHWM, reset after start-up) of a process that runs the
 //   app and only uploads, beside its resident memory before the first upload (modules loaded, signed
 //   in); and the same for a process that only loads the workbook with exceljs, for scale.
