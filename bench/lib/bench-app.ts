@@ -1,6 +1,7 @@
 // The real app in-process for the upload benchmark: a seeded world (team, scientist, enzyme,
 // kinetic assay, study) on the benchmark's database, and a signed-in HTTP agent that posts files.
 // GENERATED DATA: every record here is invented for the benchmark.
+import type { Server } from 'node:http';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { hashPassword } from '../../server/auth/passwords';
@@ -72,7 +73,7 @@ export async function seedBenchWorld(db: Db): Promise<BenchWorld> {
   return { teamId: team.id, userId: user.id, studyId: study.id };
 }
 
-/** The app on `url`, signed in as the bench scientist; `upload` posts the file to a fresh 384-well plate. */
+/** The app listening on `url`'s database, signed in as the bench scientist; `upload` posts the file to a plate. */
 export async function startBenchApp(url: string, world: BenchWorld) {
   const { pool, db } = createDb(url);
   const app = createApp({
@@ -91,7 +92,11 @@ export async function startBenchApp(url: string, world: BenchWorld) {
       pruneSessions: false,
     },
   });
-  const agent = request.agent(app);
+  // Listening once, as server/index.ts does (supertest would otherwise start a server per request).
+  const server = await new Promise<Server>((resolve) => {
+    const listening = app.listen(0, '127.0.0.1', () => resolve(listening));
+  });
+  const agent = request.agent(server);
   const signIn = await agent.post('/api/auth/sign-in').send({ email, password });
   const csrf = signIn.body.csrfToken as string;
   let count = 0;
@@ -120,6 +125,9 @@ export async function startBenchApp(url: string, world: BenchWorld) {
         .attach('file', bytes, `bench-${count}.xlsx`);
       if (res.status !== 201) throw new Error(`upload answered ${res.status}: ${JSON.stringify(res.body)}`);
     },
-    close: () => pool.end(),
+    async close() {
+      await new Promise((resolve) => server.close(resolve));
+      await pool.end();
+    },
   };
 }
