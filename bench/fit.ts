@@ -1,7 +1,7 @@
 // Fitting-engine figures (printed only; nothing is asserted here — the tests check correctness):
 //  1. bell fits per second on bell-5000.json through the command line as a whole process, beside
 //     the reference figures of shared/reference/README.md, with the agreement to the exact minima;
-//  2. start-up cost of the command on its own, and the whole process on one thread only;
+//  2. start-up cost of the command on its own;
 //  3. one profile with 1,000 bootstrap resamples;
 //  4. ml-levenberg-marquardt on the NIST and reference checks (why Bellwether has its own solver).
 import { spawnSync } from 'node:child_process';
@@ -77,15 +77,6 @@ const n = Number(/ n=(\d+)/.exec(runs[0].stderr)?.[1]);
 const whole = median(runs.map((r) => r.seconds));
 const wholeCpu = median(runs.map((r) => r.cpu));
 const viaNpm = timed('npm', ['run', '--silent', 'bellwether', '--', 'fit', file, '--timing']).seconds;
-const oneThread = Array.from({ length: REPEATS }, () =>
-  timed(process.execPath, ['bin/bellwether.js', 'fit', file, '--model', 'bell', '--timing'], {
-    BELLWETHER_THREADS: '1',
-  }),
-);
-const oneThreadWhole = median(oneThread.map((r) => r.seconds));
-const oneThreadLoop = median(oneThread.map((r) => Number(/fits_per_s=(\d+)/.exec(r.stderr)?.[1])));
-if (oneThread[0].stdout !== runs[0].stdout) throw new Error('one thread and several threads disagree');
-
 const results = JSON.parse(runs[0].stdout).results as (Ref & { converged: boolean })[];
 let agree = 0;
 for (const r of results) {
@@ -98,15 +89,12 @@ for (const r of results) {
 }
 
 line(
-  `bell model, bell-5000.json (${n} profiles), median of ${REPEATS} runs of bin/bellwether.js fit --timing, on ${availableParallelism()} threads`,
+  `bell model, bell-5000.json (${n} profiles), median of ${REPEATS} runs of bin/bellwether.js fit --timing`,
 );
 line(`  fitting loop:   ${median(loopRates)} fits/s        (scipy ≈ 1,280; R ≈ 510)`);
 line(`  whole process:  ${Math.round(n / whole)} fits/s  (${whole.toFixed(2)} s; scipy ≈ 1,100; R ≈ 405)`);
 line(
   `  ratio to scipy: loop ${(median(loopRates) / 1280).toFixed(1)}×, whole process ${(n / whole / 1100).toFixed(1)}×`,
-);
-line(
-  `  on one thread (BELLWETHER_THREADS=1): loop ${oneThreadLoop} fits/s, whole process ${Math.round(n / oneThreadWhole)} fits/s (${oneThreadWhole.toFixed(2)} s), same output bytes`,
 );
 line(
   `  start-up alone (bin/bellwether.js --help): ${startup.toFixed(2)} s; via npm run: ${viaNpm.toFixed(2)} s for the whole fit (npm's own start-up included)`,

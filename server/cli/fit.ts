@@ -2,14 +2,8 @@
 // Reads the datasets format of the reference README, writes its results format to stdout.
 // Exit codes: 0 when the file was valid (a dataset that cannot be fitted is reported in place),
 // 2 for bad arguments, 1 for a file that cannot be read or is not a datasets file.
-// Large files are fitted on every core: worker threads and this thread take chunks of datasets
-// from a shared counter, and the results are put back in the order of the file (the numbers do not
-// depend on which thread fitted a dataset). BELLWETHER_THREADS=N sets the number of threads
-// (1: this thread only); BELLWETHER_THREADS_REPORT=1 says on standard error how the work was shared.
-import { readFile, stat } from 'node:fs/promises';
-import { availableParallelism } from 'node:os';
+import { readFile } from 'node:fs/promises';
 import { performance } from 'node:perf_hooks';
-import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import { ENGINE_VERSION, fitProfile, type ModelId, type ProfileFit } from '@shared/fitting';
 
 const MODELS = ['bell', 'acid', 'base', 'bell-plateau', 'auto'] as const;
@@ -152,101 +146,6 @@ function fitOne(d: Dataset, args: Args): Record<string, unknown> {
     : failedResult(d.id, args.model, n, fit.error.code, fit.error.message);
 }
 
-/** Datasets per claim from the shared counter: small enough to even out the threads' shares. */
-const CHUNK = 50;
-/** Files smaller than this (about 400 datasets of 45 points) are fitted on this thread alone:
- *  starting a worker would cost more than it saves. */
-const PARALLEL_FROM_BYTES = 200_000;
-
-type WorkerInput = { kind: 'bellwether-fit'; file: string; args: Args; counter: SharedArrayBuffer };
-/** A run of consecutive results, already as JSON without the surrounding brackets. */
-type Piece = { start: number; json: string };
-
-/** Claims chunks from the shared counter until none is left; each chunk becomes one piece. */
-function fitClaimed(datasets: Dataset[], args: Args, counter: Int32Array): Piece[] {
-  const pieces: Piece[] = [];
-  for (;;) {
-    const start = Atomics.add(counter, 0, CHUNK);
-    if (start >= datasets.length) return pieces;
-    pieces.push({ start, json: fitRange(datasets, args, start, Math.min(start + CHUNK, datasets.length)) });
-  }
-}
-
-function fitRange(datasets: Dataset[], args: Args, start: number, end: number): string {
-  const parts: string[] = [];
-  for (let i = start; i < end; i++) parts.push(JSON.stringify(fitOne(datasets[i], args)));
-  return parts.join(',');
-}
-
-/** Worker threads run this module file itself, which only compiled JavaScript can do. */
-const canStartWorkers = /\.m?js$/.test(new URL(import.meta.url).pathname);
-
-function threadCount(bytes: number): number {
-  const asked = Number(process.env.BELLWETHER_THREADS);
-  const cores = Number.isInteger(asked) && asked > 0 ? asked : availableParallelism();
-  if (!canStartWorkers || bytes < PARALLEL_FROM_BYTES) return 1;
-  return Math.max(1, Math.min(cores, 16, Math.floor(bytes / (PARALLEL_FROM_BYTES / 2))));
-}
-
-/**
- * Worker threads started before this thread reads the file, so that their start-up overlaps the
- * reading; each reads and parses the file itself, then claims chunks from the shared counter.
- * A worker that fails gives nothing back, and the chunks it claimed are fitted here.
- */
-function startWorkers(file: string, args: Args, threads: number) {
-  const shared = new SharedArrayBuffer(4);
-  const done: Promise<Piece[]>[] = [];
-  const workers: Worker[] = [];
-  for (let k = 1; k < threads; k++) {
-    const input: WorkerInput = { kind: 'bellwether-fit', file, args, counter: shared };
-    const worker = new Worker(new URL(import.meta.url), { workerData: input });
-    workers.push(worker);
-    done.push(
-      new Promise<Piece[]>((resolve) => {
-        worker.once('message', (pieces: Piece[]) => resolve(pieces));
-        worker.once('error', () => resolve([]));
-        worker.once('exit', () => resolve([]));
-      }),
-    );
-  }
-  return {
-    counter: new Int32Array(shared),
-    done,
-    stop: () => {
-      for (const w of workers) void w.terminate();
-    },
-  };
-}
-
-/** Every result as JSON, in the order of the file: this thread's chunks, then the workers'. */
-async function fitAll(datasets: Dataset[], args: Args, pool: ReturnType<typeof startWorkers>): Promise<string> {
-  const pieces = fitClaimed(datasets, args, pool.counter);
-  const mine = pieces.length;
-  for (const theirs of await Promise.all(pool.done)) pieces.push(...theirs);
-  if (process.env.BELLWETHER_THREADS_REPORT === '1') {
-    process.stderr.write(
-      `threads=${1 + pool.done.length} chunks=${Math.ceil(datasets.length / CHUNK)} chunks_by_workers=${pieces.length - mine}\n`,
-    );
-  }
-  const byStart = new Map(pieces.map((p) => [p.start, p.json]));
-  const ordered: string[] = [];
-  for (let start = 0; start < datasets.length; start += CHUNK) {
-    const json = byStart.get(start) ?? fitRange(datasets, args, start, Math.min(start + CHUNK, datasets.length));
-    if (json !== '') ordered.push(json);
-  }
-  return ordered.join(',');
-}
-
-async function runWorker(input: WorkerInput): Promise<Piece[]> {
-  const datasets = readDatasets(await readFile(input.file, 'utf8'));
-  return typeof datasets === 'string' ? [] : fitClaimed(datasets, input.args, new Int32Array(input.counter));
-}
-
-if (!isMainThread && parentPort && (workerData as WorkerInput | null)?.kind === 'bellwether-fit') {
-  const port = parentPort;
-  void runWorker(workerData as WorkerInput).then((pieces) => port.postMessage(pieces));
-}
-
 export async function run(argv: string[]): Promise<number> {
   if (argv.includes('--help') || argv.includes('-h')) {
     process.stdout.write(usage);
@@ -258,29 +157,23 @@ export async function run(argv: string[]): Promise<number> {
     return 2;
   }
   let text: string;
-  let pool: ReturnType<typeof startWorkers> | null = null;
   try {
-    const { size } = await stat(args.file);
-    pool = startWorkers(args.file, args, threadCount(size));
     text = await readFile(args.file, 'utf8');
   } catch (error) {
-    pool?.stop();
     const code = (error as NodeJS.ErrnoException).code;
     process.stderr.write(`bellwether fit: cannot read ${args.file}${code ? ` (${code})` : ''}\n`);
     return 1;
   }
   const datasets = readDatasets(text);
   if (typeof datasets === 'string') {
-    pool.stop();
     process.stderr.write(`bellwether fit: ${args.file} is not a datasets file: ${datasets}\n`);
     return 1;
   }
   const t0 = performance.now();
-  const results = await fitAll(datasets, args, pool);
+  const results = datasets.map((d) => fitOne(d, args));
   const loop = (performance.now() - t0) / 1000;
   const engine = { name: 'bellwether', version: ENGINE_VERSION, model: args.model };
-  // the same bytes as JSON.stringify({ engine, results }) of the result objects
-  process.stdout.write(`{"engine":${JSON.stringify(engine)},"results":[${results}]}\n`);
+  process.stdout.write(JSON.stringify({ engine, results }) + '\n');
   if (args.timing) {
     const rate = loop > 0 ? Math.round(datasets.length / loop) : 0;
     process.stderr.write(`fit_loop_s=${loop.toFixed(4)} n=${datasets.length} fits_per_s=${rate}\n`);

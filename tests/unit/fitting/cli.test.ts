@@ -189,24 +189,4 @@ describe('bellwether fit', () => {
       expect(stderr).toMatch(message);
     }
   });
-
-  it('gives the same bytes whether the datasets are fitted on one thread or shared among worker threads', async () => {
-    // the first 1,200 profiles of bell-5000.json (shared/reference), with two broken ones among them
-    const all = readReference<{ datasets: RefDataset[] }>('bell-5000.json').datasets.slice(0, 1200);
-    all.splice(517, 0, { id: 'broken', pH: [4, 5, 6], v: [1, 2] } as unknown as RefDataset);
-    all.splice(1010, 0, { id: 'nan', pH: [4, 5, 6, 7], v: [1, null, 3, 4] } as unknown as RefDataset);
-    const many = file('many.json', JSON.stringify({ datasets: all }));
-    const report = { BELLWETHER_THREADS_REPORT: '1' };
-    const one = await fit([many], { ...report, BELLWETHER_THREADS: '1' });
-    const three = await fit([many], { ...report, BELLWETHER_THREADS: '3' });
-    expect(one.code).toBe(0);
-    expect(three.code).toBe(0);
-    expect(one.stderr).toMatch(/^threads=1 chunks=25 chunks_by_workers=0\n$/);
-    // the workers did part of the work (how much depends on the machine)
-    const byWorkers = Number(/^threads=3 chunks=25 chunks_by_workers=(\d+)\n$/.exec(three.stderr)?.[1]);
-    expect(byWorkers).toBeGreaterThan(0);
-    expect(three.stdout).toBe(one.stdout);
-    const ids = (JSON.parse(one.stdout).results as { id: string }[]).map((r) => r.id);
-    expect(ids).toEqual(all.map((d) => d.id));
-  });
 });
