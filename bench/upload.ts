@@ -157,7 +157,7 @@ const childAt = process.argv.indexOf('--child');
 if (childAt >= 0) {
   const result = await child(process.argv[childAt + 1] as Mode, JSON.parse(process.argv[childAt + 2]) as Job);
   process.stdout.write(JSON.stringify(result));
-  // The job queue and the supertest servers may hold the event loop open; the answer is written.
+  // Open handles (the job queue, idle database clients) may keep the event loop alive; the answer is written.
   process.exit(0);
 } else {
   await main();
