@@ -5,7 +5,7 @@ import type { VariantProfile, WellRow } from '@shared/analysis';
 import type { AsymptoteMeeting, Asymptote } from '@/components/charts/log-activity-chart';
 import type { ProfileChartPoint, ProfileChartWell } from '@/components/charts/profile-chart';
 import type { ChartCurve, XMarker } from '@/components/charts/types';
-import { formatFixed } from '@/components/ui/numbers';
+import { formatFixed, formatSig } from '@/components/ui/numbers';
 import { pickInterval } from './intervals';
 import { logAsymptotes } from './log-asymptotes';
 import { pkaNames } from './models';
@@ -88,7 +88,7 @@ export function profileView(
         const ref = profile.fitData.wells[i];
         return r === null || r === undefined
           ? []
-          : [{ x: pH, residual: r, label: `${ref?.well ?? ''} at pH ${pH}: ${r.toPrecision(3)}` }];
+          : [{ x: pH, residual: r, label: `${ref?.well ?? ''} at pH ${pH}: ${formatSig(r, 3)}` }];
       })
     : [];
   const values = fit ? Object.fromEntries(Object.entries(fit.parameters).map(([k, e]) => [k, e.value])) : {};

@@ -194,7 +194,7 @@ describe('what the profile chart draws', () => {
 
   it('when residuals are drawn, then each names its well and missing residuals are skipped', () => {
     expect(view.residuals).toEqual([
-      { x: 5, residual: -0.5, label: 'A1 at pH 5: -0.500' },
+      { x: 5, residual: -0.5, label: 'A1 at pH 5: −0.500' },
       { x: 5, residual: 1.5, label: 'A2 at pH 5: 1.50' },
     ]);
     expect(view.s).toBe(2);
