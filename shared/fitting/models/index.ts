@@ -14,3 +14,6 @@ export const MODELS: Readonly<Record<ModelId, PhModel>> = {
   'bell-plateau': bellPlateauModel,
   three: threeModel,
 };
+
+/** The apparent pKa parameters of a model, acid side first (its names after the activity levels). */
+export const pKaNamesOf = (id: ModelId): readonly string[] => MODELS[id].names.slice(MODELS[id].nLinear);

@@ -1,6 +1,6 @@
 // A fitted value over its interval, with a mark saying which interval it is (t, p, b).
 import { formatInterval, formatNumber, sigFor, type NumberStyle } from '../utils/format-estimate';
-import { intervalMarks } from '../utils/intervals';
+import { intervalMarks } from '@/lib/intervals';
 import type { EstimateCell } from '../utils/parameter-rows';
 
 export type EstimateTextProps = { cell: EstimateCell | null; style: NumberStyle | 'auto' };

@@ -2,7 +2,7 @@
 // half-activity window, each over its interval; the model, n and flags; the reference marked.
 import type { VariantProfile } from '@shared/analysis';
 import { DataTable } from '@/components/ui/data-table';
-import { intervalMarks } from '../utils/intervals';
+import { intervalMarks } from '@/lib/intervals';
 import { parameterRows } from '../utils/parameter-rows';
 import { parameterColumns } from './parameter-columns';
 

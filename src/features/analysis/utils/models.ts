@@ -1,5 +1,6 @@
 // The models in words, and which parameters of each are apparent pKa values (SCIENCE.md §1).
 import type { ModelId } from '@shared/fitting';
+import { MODEL_IDS, pKaNamesOf } from '@shared/fitting/models';
 
 export const modelWords: Record<ModelId, string> = {
   acid: 'one ionization, acid limb',
@@ -10,13 +11,10 @@ export const modelWords: Record<ModelId, string> = {
 };
 
 /** The pKa-like parameters of a model, acid side first. */
-export const pkaNames: Record<ModelId, string[]> = {
-  acid: ['pKa'],
-  base: ['pKa'],
-  bell: ['pKa1', 'pKa2'],
-  'bell-plateau': ['pKa1', 'pKa2'],
-  three: ['pKa', 'pKb', 'pKc'],
-};
+export const pkaNames = Object.fromEntries(MODEL_IDS.map((id) => [id, pKaNamesOf(id)])) as Record<
+  ModelId,
+  readonly string[]
+>;
 
 /** The parameter that sets the level: V, or the middle plateau of the plateau model. */
 export const levelName = (model: ModelId) => (model === 'bell-plateau' ? 'V_mid' : 'V');

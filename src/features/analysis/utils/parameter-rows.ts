@@ -2,7 +2,7 @@
 // half-activity window, each with the interval the screen shows (and which kind it is).
 import type { VariantProfile } from '@shared/analysis';
 import type { Flag, Interval, ModelId } from '@shared/fitting';
-import { pickInterval, type Estimated, type IntervalKind } from './intervals';
+import { pickInterval, type Estimated, type IntervalKind } from '@/lib/intervals';
 import { levelName, pkaSides } from './models';
 
 export type EstimateCell = {

@@ -1,4 +1,5 @@
-import { chooseInterval, formatEstimate, formatIntervalText, type Estimated } from '../utils/estimates';
+import { pickInterval, type Estimated } from '@/lib/intervals';
+import { formatEstimate, formatIntervalText } from '../utils/estimates';
 
 export type EstimateCellProps = {
   estimate: Estimated | null | undefined;
@@ -9,7 +10,7 @@ export type EstimateCellProps = {
 /** A fitted value over its interval, for the report tables. */
 export function EstimateCell({ estimate, phLike, bootstrapCurrent }: EstimateCellProps) {
   if (!estimate || estimate.value === null) return <span className="text-ink-faint">—</span>;
-  const chosen = chooseInterval(estimate, bootstrapCurrent);
+  const chosen = pickInterval(estimate, bootstrapCurrent);
   return (
     <span className="inline-flex flex-col items-end leading-tight">
       <span className="tabular-nums">{formatEstimate(estimate.value, phLike)}</span>

@@ -2,7 +2,7 @@
 // each limb, the half-activity window and the peak activity, each over its interval; flags below.
 import type { VariantProfile } from '@shared/analysis';
 import type { ProfileFit } from '@shared/fitting';
-import { chooseInterval, intervalWords, type IntervalKind } from '../utils/estimates';
+import { intervalMarks, pickInterval, type IntervalKind } from '@/lib/intervals';
 import { EstimateCell } from './estimate-cell';
 
 /** The pKa that sets each limb, whatever the model (as shared/comparison reads them). */
@@ -39,7 +39,7 @@ const th = 'border-b border-line py-1 pr-2 font-semibold';
 export function ParameterTable({ profiles, activityUnit, bootstrapCurrent }: ParameterTableProps) {
   const kinds = new Set<IntervalKind>();
   for (const p of profiles) {
-    const c = chooseInterval(p.fit?.pHopt, bootstrapCurrent);
+    const c = pickInterval(p.fit?.pHopt, bootstrapCurrent);
     if (c) kinds.add(c.kind);
   }
   const flagged = profiles.filter((p) => (p.fit?.flags.length ?? 0) > 0 || p.error);
@@ -102,7 +102,7 @@ export function ParameterTable({ profiles, activityUnit, bootstrapCurrent }: Par
         </tbody>
       </table>
       <p className="mt-1 text-xs text-ink-muted">
-        Under each value: its {[...kinds].map((k) => intervalWords[k]).join('; ') || '95 % interval'}. “Open”:
+        Under each value: its {[...kinds].map((k) => intervalMarks[k].words).join('; ') || '95 % interval'}. “Open”:
         the data do not bound the interval on that side.
       </p>
       {flagged.length > 0 && (

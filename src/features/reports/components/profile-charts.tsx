@@ -1,7 +1,7 @@
 // One chart per variant for the study report, two to a row on A4.
 import type { VariantProfile } from '@shared/analysis';
 import { ProfileChart } from '@/components/charts/profile-chart';
-import { profileChartData } from '../utils/profile-chart-data';
+import { profileChartData } from '@/components/charts/profile-chart-data';
 
 export type ProfileChartsProps = {
   profiles: VariantProfile[];

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { formatInterval, formatNumber, sigFor } from '@/features/analysis/utils/format-estimate';
-import { intervalMarks, pickInterval } from '@/features/analysis/utils/intervals';
+import { intervalMarks, pickInterval } from '@/lib/intervals';
 
 describe('numbers of the parameter tables', () => {
   it('when a style gives decimals or significant figures, then the number is written that way, with a true minus', () => {

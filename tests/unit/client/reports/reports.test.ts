@@ -1,47 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import {
-  chooseInterval,
-  formatEstimate,
-  formatIntervalText,
-  intervalWords,
-} from '@/features/reports/utils/estimates';
-import { profileChartData, relativeCurves } from '@/features/reports/utils/profile-chart-data';
+import { formatEstimate, formatIntervalText } from '@/features/reports/utils/estimates';
+import { profileChartData } from '@/components/charts/profile-chart-data';
+import { relativeCurves } from '@/features/reports/utils/profile-chart-data';
 import { isEditable, lockReason } from '@/features/studies/utils/study-status';
-import { pickInterval } from '@/features/analysis/utils/intervals';
 import { profileView } from '@/features/analysis/utils/profile-view';
 import { derived, estimate, fitOf, point, profileOf } from '../analysis/fixtures';
 
 describe('report estimates', () => {
-  const cases = [
-    {
-      value: 5,
-      ci95: [4.8, 5.2] as [number, number],
-      profile95: [4.7, 5.4] as [number, number],
-      boot95: [4.75, 5.3] as [number, number],
-    },
-    {
-      value: 5,
-      ci95: [4.8, 5.2] as [number, number],
-      profile95: null,
-      boot95: [4.75, 5.3] as [number, number],
-    },
-    { value: 5, ci95: [4.8, 5.2] as [number, number] },
-    { value: null, ci95: null },
-  ];
-
-  it('when a report picks an interval, then it is the same one the analysis screen shows', () => {
-    for (const e of cases) {
-      for (const boot of [true, false]) expect(chooseInterval(e, boot)).toEqual(pickInterval(e, boot));
-    }
-    expect(chooseInterval(undefined, true)).toBeNull();
-  });
-
   it('when values are written, then pH-like ones keep two decimals and others three figures; open ends say so', () => {
     expect(formatEstimate(6.456, true)).toBe('6.46');
     expect(formatEstimate(0.012345, false)).toBe('0.0123');
     expect(formatIntervalText([null, 8.1], true)).toBe('open to 8.10');
     expect(formatIntervalText(undefined, true)).toBe('');
-    expect(Object.keys(intervalWords).sort()).toEqual(['bootstrap', 'profile', 't']);
   });
 });
 

@@ -1,4 +1,4 @@
-// Which interval a value is shown with. Bootstrap percentile intervals when a current bootstrap
+// Which interval a value is shown with, on the analysis screen and in the printed reports alike. Bootstrap percentile intervals when a current bootstrap
 // exists, else profile-likelihood intervals (honest for nonlinear fits, SCIENCE.md §1.7), else the
 // Wald interval value ± t(0.975, dof)·SE. The screen always says which one it shows.
 import type { Interval } from '@shared/fitting';
