@@ -9,6 +9,7 @@ import type { PhPoint } from '../api/get-study-context';
 import type { FillDirection, FillSeriesInput } from '../utils/fill-series';
 import { cellName, cellOf, type Cell } from '../utils/grid';
 import { gridGeometry } from './plate-grid';
+import { CountInput, WellInput } from './small-inputs';
 
 export type FillSeriesDialogProps = {
   open: boolean;
@@ -22,8 +23,6 @@ export type FillSeriesDialogProps = {
   selectionColumns: number;
   onFill: (input: FillSeriesInput) => void;
 };
-
-const input = 'h-8 rounded border border-line-strong bg-surface px-2';
 
 export function FillSeriesDialog(props: FillSeriesDialogProps) {
   return props.open ? <FillSeriesForm {...props} /> : null;
@@ -103,14 +102,7 @@ function FillSeriesForm({
           }}
         >
           <div className="flex flex-wrap gap-4">
-            <label className="block">
-              <span className="mb-0.5 block font-semibold">Start well</span>
-              <input
-                className={`${input} w-20`}
-                value={startText}
-                onChange={(e) => setStartText(e.target.value)}
-              />
-            </label>
+            <WellInput label="Start well" value={startText} onChange={setStartText} />
             <fieldset>
               <legend className="mb-0.5 font-semibold">Direction</legend>
               <label className="mr-3">
@@ -134,28 +126,8 @@ function FillSeriesForm({
             </fieldset>
           </div>
           <div className="flex flex-wrap gap-4">
-            <label className="block">
-              <span className="mb-0.5 block font-semibold">Wells per pH point</span>
-              <input
-                type="number"
-                min={1}
-                max={24}
-                className={`${input} w-20 text-right`}
-                value={span}
-                onChange={(e) => setSpan(Math.max(1, Number(e.target.value) || 1))}
-              />
-            </label>
-            <label className="block">
-              <span className="mb-0.5 block font-semibold">Number of {acrossWord} to fill</span>
-              <input
-                type="number"
-                min={1}
-                max={24}
-                className={`${input} w-20 text-right`}
-                value={lines}
-                onChange={(e) => setLines(Math.max(1, Number(e.target.value) || 1))}
-              />
-            </label>
+            <CountInput label="Wells per pH point" value={span} onChange={setSpan} />
+            <CountInput label={`Number of ${acrossWord} to fill`} value={lines} onChange={setLines} />
             <label className="mt-6 block">
               <input type="checkbox" checked={descending} onChange={(e) => setDescending(e.target.checked)} />{' '}
               Highest pH first

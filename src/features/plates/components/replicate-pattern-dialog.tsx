@@ -9,6 +9,7 @@ import type { StudyVariant } from '../api/get-study-context';
 import { cellName, cellOf, type Cell } from '../utils/grid';
 import type { PatternInput } from '../utils/replicate-pattern';
 import { gridGeometry } from './plate-grid';
+import { CountInput, WellInput } from './small-inputs';
 
 export type ReplicatePatternDialogProps = {
   open: boolean;
@@ -21,8 +22,6 @@ export type ReplicatePatternDialogProps = {
   defaultLength: number;
   onApply: (input: PatternInput) => void;
 };
-
-const input = 'h-8 rounded border border-line-strong bg-surface px-2';
 
 export function ReplicatePatternDialog(props: ReplicatePatternDialogProps) {
   return props.open ? <PatternForm {...props} /> : null;
@@ -87,14 +86,7 @@ function PatternForm({
         }}
       >
         <div className="flex flex-wrap gap-4">
-          <label className="block">
-            <span className="mb-0.5 block font-semibold">Start well</span>
-            <input
-              className={`${input} w-20`}
-              value={startText}
-              onChange={(e) => setStartText(e.target.value)}
-            />
-          </label>
+          <WellInput label="Start well" value={startText} onChange={setStartText} />
           <fieldset>
             <legend className="mb-0.5 font-semibold">Replicates run</legend>
             <label className="mr-3">
@@ -118,30 +110,12 @@ function PatternForm({
           </fieldset>
         </div>
         <div className="flex flex-wrap gap-4">
-          <label className="block">
-            <span className="mb-0.5 block font-semibold">Replicates per variant</span>
-            <input
-              type="number"
-              min={1}
-              max={24}
-              className={`${input} w-20 text-right`}
-              value={replicates}
-              onChange={(e) => setReplicates(Math.max(1, Number(e.target.value) || 1))}
-            />
-          </label>
-          <label className="block">
-            <span className="mb-0.5 block font-semibold">
-              Wells per {direction === 'rows' ? 'row' : 'column'}
-            </span>
-            <input
-              type="number"
-              min={1}
-              max={24}
-              className={`${input} w-20 text-right`}
-              value={length}
-              onChange={(e) => setLength(Math.max(1, Number(e.target.value) || 1))}
-            />
-          </label>
+          <CountInput label="Replicates per variant" value={replicates} onChange={setReplicates} />
+          <CountInput
+            label={`Wells per ${direction === 'rows' ? 'row' : 'column'}`}
+            value={length}
+            onChange={setLength}
+          />
         </div>
         <fieldset>
           <legend className="mb-0.5 font-semibold">Variants, in this order</legend>
