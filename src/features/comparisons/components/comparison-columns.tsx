@@ -7,6 +7,7 @@ import { Badge } from '@/components/ui/badge';
 import type { ProfileStyle } from '../utils/colors';
 import { modelWords } from '../utils/format';
 import { DifferenceCell, ValueCell } from './metric-cells';
+import { LineSwatch } from './line-swatch';
 
 const column = createColumnHelper<ComparisonRow>();
 
@@ -114,17 +115,7 @@ function ProfileCell({ row, style }: { row: ComparisonRow; style?: ProfileStyle 
   return (
     <div className="min-w-36">
       <p className="flex items-center gap-1.5 font-semibold whitespace-nowrap">
-        <svg viewBox="0 0 14 8" className="h-2 w-3.5 shrink-0" aria-hidden="true">
-          <line
-            x1="0"
-            x2="14"
-            y1="4"
-            y2="4"
-            stroke={style?.color ?? '#000'}
-            strokeWidth="3"
-            strokeDasharray={style?.dash}
-          />
-        </svg>
+        <LineSwatch style={style} />
         {row.variantName}
       </p>
       <p className="mt-0.5 flex flex-wrap gap-1">

@@ -6,6 +6,7 @@ import { Badge } from '@/components/ui/badge';
 import type { ProfileStyle } from '../utils/colors';
 import { differenceHeaders, metricHeaders } from './comparison-columns';
 import { DifferenceCell, ValueCell } from './metric-cells';
+import { LineSwatch } from './line-swatch';
 
 export type ComparisonPrintTablesProps = {
   result: ComparisonResult;
@@ -27,17 +28,7 @@ function ProfileName({
   return (
     <td className="py-1 pr-1.5 align-top">
       <span className="flex items-center gap-1 font-semibold">
-        <svg viewBox="0 0 14 8" className="h-2 w-3.5 shrink-0" aria-hidden="true">
-          <line
-            x1="0"
-            x2="14"
-            y1="4"
-            y2="4"
-            stroke={style?.color ?? '#000'}
-            strokeWidth="3"
-            strokeDasharray={style?.dash}
-          />
-        </svg>
+        <LineSwatch style={style} />
         {row.variantName}
       </span>
       {showStudy && <span className="block text-xs text-ink-muted">{row.studyName}</span>}
