@@ -8,7 +8,18 @@ const restrict = (patterns, message) => ({
 });
 
 export default tseslint.config(
-  { ignores: ['dist', 'node_modules', 'drizzle', '.data', 'test-results', 'playwright-report', 'coverage'] },
+  {
+    ignores: [
+      'dist',
+      'node_modules',
+      'drizzle',
+      '.data',
+      'test-results',
+      'playwright-report',
+      'coverage',
+      'shared/fitting/wasm/assembly',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
@@ -24,7 +35,10 @@ export default tseslint.config(
     rules: {
       'react-hooks/rules-of-hooks': 'error',
       'react-hooks/exhaustive-deps': 'warn',
-      ...restrict(['**/server/**', '../server/*'], 'The client never imports server code; share through shared/.'),
+      ...restrict(
+        ['**/server/**', '../server/*'],
+        'The client never imports server code; share through shared/.',
+      ),
     },
   },
   {

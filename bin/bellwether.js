@@ -4,7 +4,7 @@
 // from has changed (the list comes from esbuild's metafile), so a run starts in plain Node.js
 // instead of compiling through tsx each time. Where the bundle cannot be made (no esbuild, no
 // writable cache), the sources run through tsx as before.
-import { mkdirSync, readFileSync, renameSync, statSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readdirSync, readFileSync, renameSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 
@@ -29,6 +29,24 @@ function freshBundle() {
   }
 }
 
+/**
+ * Packages stay in node_modules, except the few small functions taken from simple-statistics:
+ * bundled, only they are kept, where loading the whole package costs a command about 25 ms.
+ */
+const BUNDLED_PACKAGES = new Set(['simple-statistics']);
+const externalPackages = {
+  name: 'external-packages',
+  setup(build) {
+    build.onResolve({ filter: /^[^./]/ }, (args) => {
+      if (args.path.startsWith('@shared/') || args.path.startsWith('@/')) return undefined;
+      const name = args.path.startsWith('@')
+        ? args.path.split('/').slice(0, 2).join('/')
+        : args.path.split('/')[0];
+      return BUNDLED_PACKAGES.has(name) ? undefined : { path: args.path, external: true };
+    });
+  },
+};
+
 async function buildBundle() {
   const esbuild = await import('esbuild');
   const result = await esbuild.build({
@@ -41,7 +59,7 @@ async function buildBundle() {
     // one chunk per command, so that packages stay in node_modules and load only for the command
     // that needs them (exceljs only for `parse`)
     splitting: true,
-    packages: 'external',
+    plugins: [externalPackages],
     outExtension: { '.js': '.mjs' },
     tsconfig: join(root, 'tsconfig.json'),
     write: false,
@@ -61,6 +79,17 @@ async function buildBundle() {
   }
   writeFileSync(inputsFile + suffix, JSON.stringify(Object.keys(result.metafile.inputs)));
   renameSync(inputsFile + suffix, inputsFile);
+  // chunks of earlier builds go once they are old enough that no run can still be loading them
+  const kept = new Set(result.outputFiles.map((file) => file.path));
+  for (const name of readdirSync(cacheDir)) {
+    const file = join(cacheDir, name);
+    if (!name.endsWith('.mjs') || kept.has(file)) continue;
+    try {
+      if (Date.now() - statSync(file).mtimeMs > 10 * 60 * 1000) unlinkSync(file);
+    } catch {
+      // another run removed it first
+    }
+  }
   return join(cacheDir, 'index.mjs');
 }
 

@@ -4,7 +4,8 @@
 // 2 for bad arguments, 1 for a file that cannot be read or is not a datasets file.
 import { readFile } from 'node:fs/promises';
 import { performance } from 'node:perf_hooks';
-import { ENGINE_VERSION, fitProfile, type ModelId, type ProfileFit } from '@shared/fitting';
+import { ENGINE_VERSION, fitProfile, NO_START_MESSAGE, type ModelId, type ProfileFit } from '@shared/fitting';
+import { bellKernel, type BellKernel, type BellSummary } from '@shared/fitting/wasm/bell-kernel';
 
 const MODELS = ['bell', 'acid', 'base', 'bell-plateau', 'auto'] as const;
 type CliModel = (typeof MODELS)[number];
@@ -130,8 +131,48 @@ function failedResult(
   return out;
 }
 
-function fitOne(d: Dataset, args: Args): Record<string, unknown> {
+/** The results-format record of the WebAssembly bell fit (same fields and order as resultOf). */
+function kernelResult(id: string, s: BellSummary): Record<string, unknown> {
+  return {
+    id,
+    model: 'bell',
+    n: s.n,
+    dof: s.dof,
+    V: s.V,
+    pKa1: s.pKa1,
+    pKa2: s.pKa2,
+    se: s.se,
+    pHopt: s.pHopt,
+    pHopt_se: s.pHoptSe,
+    ssr: s.ssr,
+    converged: s.converged,
+    flags: s.flags,
+  };
+}
+
+/**
+ * The bell model without bootstrap goes through the WebAssembly kernel (no warm-up; the same
+ * results, checked by tests/unit/fitting/bell-wasm.test.ts); null leaves the profile to the engine
+ * (a profile the engine refuses, with its message, or one longer than the kernel takes).
+ */
+function fitWithKernel(d: Dataset, kernel: BellKernel): Record<string, unknown> | null {
+  let s: BellSummary | 'no_start' | null;
+  try {
+    s = kernel.fit(d);
+  } catch {
+    return null; // an unexpected stop of the kernel: the engine fits this profile instead
+  }
+  if (s === null) return null;
+  if (s === 'no_start') return failedResult(d.id, 'bell', d.pH.length, 'bad_start', NO_START_MESSAGE);
+  return kernelResult(d.id, s);
+}
+
+function fitOne(d: Dataset, args: Args, kernel: BellKernel | null): Record<string, unknown> {
   const n = Array.isArray(d.pH) ? d.pH.length : 0;
+  if (kernel) {
+    const result = fitWithKernel(d, kernel);
+    if (result) return result;
+  }
   // only what the results format holds is computed: no profile likelihood, no alternative fit,
   // no residual or covariance tables
   const fit = fitProfile(d, {
@@ -170,7 +211,11 @@ export async function run(argv: string[]): Promise<number> {
     return 1;
   }
   const t0 = performance.now();
-  const results = datasets.map((d) => fitOne(d, args));
+  // BELLWETHER_FIT_ENGINE=js sends every profile to the engine (for comparisons; DEVELOPERS.md)
+  const useKernel =
+    args.model === 'bell' && args.bootstrap === 0 && process.env.BELLWETHER_FIT_ENGINE !== 'js';
+  const kernel = useKernel ? bellKernel() : null;
+  const results = datasets.map((d) => fitOne(d, args, kernel));
   const loop = (performance.now() - t0) / 1000;
   const engine = { name: 'bellwether', version: ENGINE_VERSION, model: args.model };
   process.stdout.write(JSON.stringify({ engine, results }) + '\n');

@@ -27,6 +27,8 @@ export interface FitOptions {
   detail?: 'full' | 'summary';
 }
 
+export const NO_START_MESSAGE = 'No starting point could be evaluated for this model and data.';
+
 /** The simpler model a fit tends to when one of its pKa values runs out of the data. */
 function simplerModel(model: ModelId, notDetermined: readonly string[]): ModelId | null {
   if (model === 'bell') {
@@ -104,6 +106,6 @@ export function fitProfile(input: ProfileInput, options: FitOptions = {}): Resul
   const prepared = prepareProfile(input, MODELS[opts.model].names.length);
   if (!prepared.ok) return prepared;
   const fit = fitPrepared(prepared.value, opts);
-  if (!fit) return fail('bad_start', 'No starting point could be evaluated for this model and data.');
+  if (!fit) return fail('bad_start', NO_START_MESSAGE);
   return ok(fit);
 }

@@ -36,6 +36,7 @@ import { curveWithBand as curveWithBandRaw, evaluateModel as evaluateModelRaw } 
 import { guarded, ok } from './result';
 
 export { ENGINE_VERSION } from './version';
+export { NO_START_MESSAGE } from './fit-profile';
 export { MODEL_IDS } from './models';
 export type { ModelId } from './models';
 export type { Result, FitError, FitErrorCode } from './result';
