@@ -1,6 +1,8 @@
 // Fitting-engine figures (printed only; nothing is asserted here — the tests check correctness):
 //  1. bell fits per second on bell-5000.json through the command line as a whole process, beside
-//     the reference figures of shared/reference/README.md, with the agreement to the exact minima;
+//     the reference figures of shared/reference/README.md, with the agreement to the exact minima
+//     (the command line fits the bell through the WebAssembly kernel; the JavaScript engine alone
+//     is measured too);
 //  2. start-up cost of the command on its own;
 //  3. one profile with 1,000 bootstrap resamples;
 //  4. ml-levenberg-marquardt on the NIST and reference checks (why Bellwether has its own solver).
@@ -77,6 +79,16 @@ const n = Number(/ n=(\d+)/.exec(runs[0].stderr)?.[1]);
 const whole = median(runs.map((r) => r.seconds));
 const wholeCpu = median(runs.map((r) => r.cpu));
 const viaNpm = timed('npm', ['run', '--silent', 'bellwether', '--', 'fit', file, '--timing']).seconds;
+// the same run with every profile through the JavaScript engine instead of the WebAssembly kernel
+const engineRuns = Array.from({ length: REPEATS }, () =>
+  timed(process.execPath, ['bin/bellwether.js', 'fit', file, '--model', 'bell', '--timing'], {
+    BELLWETHER_FIT_ENGINE: 'js',
+  }),
+);
+const engineWhole = median(engineRuns.map((r) => r.seconds));
+const engineLoop = median(engineRuns.map((r) => Number(/fits_per_s=(\d+)/.exec(r.stderr)?.[1])));
+// Node.js itself, doing nothing: the floor under any whole-process figure on this machine
+const bare = median(Array.from({ length: REPEATS }, () => timed(process.execPath, ['-e', '0']).seconds));
 const results = JSON.parse(runs[0].stdout).results as (Ref & { converged: boolean })[];
 let agree = 0;
 for (const r of results) {
@@ -100,6 +112,10 @@ line(
   `  start-up alone (bin/bellwether.js --help): ${startup.toFixed(2)} s; via npm run: ${viaNpm.toFixed(2)} s for the whole fit (npm's own start-up included)`,
 );
 line(`  whole process without the start-up: ${Math.round(n / (whole - startup))} fits/s`);
+line(`  Node.js alone (node -e 0): ${bare.toFixed(2)} s`);
+line(
+  `  the same through the JavaScript engine only (BELLWETHER_FIT_ENGINE=js): loop ${engineLoop} fits/s, whole process ${Math.round(n / engineWhole)} fits/s (${engineWhole.toFixed(2)} s, ${(n / engineWhole / 1100).toFixed(1)}× scipy)`,
+);
 line(
   `  CPU time of the whole process: ${wholeCpu.toFixed(2)} s → ${Math.round(n / wholeCpu)} fits per CPU-second; start-up alone ${startupCpu.toFixed(2)} s CPU; fitting ${Math.round(n / (wholeCpu - startupCpu))} fits per CPU-second`,
 );

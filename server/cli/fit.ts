@@ -5,7 +5,12 @@
 import { readFile } from 'node:fs/promises';
 import { performance } from 'node:perf_hooks';
 import { ENGINE_VERSION, fitProfile, NO_START_MESSAGE, type ModelId, type ProfileFit } from '@shared/fitting';
-import { bellKernel, type BellKernel, type BellSummary } from '@shared/fitting/wasm/bell-kernel';
+import {
+  bellKernel,
+  type BellKernel,
+  type BellSummary,
+  type FileItem,
+} from '@shared/fitting/wasm/bell-kernel';
 
 const MODELS = ['bell', 'acid', 'base', 'bell-plateau', 'auto'] as const;
 type CliModel = (typeof MODELS)[number];
@@ -54,6 +59,17 @@ function parseArgs(args: string[]): Args | string {
 
 type Dataset = { id: string; pH: number[]; v: number[]; w?: number[] | null };
 
+/** A dataset as the engine takes it: only the shape that lets a result name its dataset is checked here. */
+function datasetOf(d: object, i: number): Dataset {
+  const { id, pH, v, w } = d as Record<string, unknown>;
+  return {
+    id: typeof id === 'string' || typeof id === 'number' ? String(id) : `#${i + 1}`,
+    pH,
+    v,
+    w,
+  } as Dataset;
+}
+
 function readDatasets(text: string): Dataset[] | string {
   let json: unknown;
   try {
@@ -66,14 +82,7 @@ function readDatasets(text: string): Dataset[] | string {
   const out: Dataset[] = [];
   for (const [i, d] of list.entries()) {
     if (d === null || typeof d !== 'object') return `dataset ${i + 1} is not an object`;
-    const { id, pH, v, w } = d as Record<string, unknown>;
-    // contents are checked by the engine; here only the shape that lets a result name its dataset
-    out.push({
-      id: typeof id === 'string' || typeof id === 'number' ? String(id) : `#${i + 1}`,
-      pH,
-      v,
-      w,
-    } as Dataset);
+    out.push(datasetOf(d as object, i));
   }
   return out;
 }
@@ -167,6 +176,14 @@ function fitWithKernel(d: Dataset, kernel: BellKernel): Record<string, unknown> 
   return kernelResult(d.id, s);
 }
 
+/** The results-format record of one dataset of a file the kernel has read. */
+function fromFileItem(item: FileItem, i: number, args: Args, kernel: BellKernel): Record<string, unknown> {
+  if (item.kind === 'fit') return kernelResult(item.id, item.summary);
+  if (item.kind === 'no_start') return failedResult(item.id, 'bell', item.n, 'bad_start', NO_START_MESSAGE);
+  // a dataset the kernel does not take from the bytes: parsed here, and fitted as any other
+  return fitOne(datasetOf(JSON.parse(item.text) as object, i), args, kernel);
+}
+
 function fitOne(d: Dataset, args: Args, kernel: BellKernel | null): Record<string, unknown> {
   const n = Array.isArray(d.pH) ? d.pH.length : 0;
   if (kernel) {
@@ -197,31 +214,40 @@ export async function run(argv: string[]): Promise<number> {
     process.stderr.write(`bellwether fit: ${args}\n\n${usage}`);
     return 2;
   }
-  let text: string;
+  let bytes: Buffer;
   try {
-    text = await readFile(args.file, 'utf8');
+    bytes = await readFile(args.file);
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
     process.stderr.write(`bellwether fit: cannot read ${args.file}${code ? ` (${code})` : ''}\n`);
     return 1;
   }
-  const datasets = readDatasets(text);
-  if (typeof datasets === 'string') {
-    process.stderr.write(`bellwether fit: ${args.file} is not a datasets file: ${datasets}\n`);
-    return 1;
-  }
-  const t0 = performance.now();
   // BELLWETHER_FIT_ENGINE=js sends every profile to the engine (for comparisons; DEVELOPERS.md)
   const useKernel =
     args.model === 'bell' && args.bootstrap === 0 && process.env.BELLWETHER_FIT_ENGINE !== 'js';
   const kernel = useKernel ? bellKernel() : null;
-  const results = datasets.map((d) => fitOne(d, args, kernel));
+  let results: Record<string, unknown>[] | null = null;
+  let t0 = performance.now();
+  if (kernel) {
+    // the kernel reads the file itself; a file it does not read goes to JSON.parse below
+    const items = kernel.fitFile(bytes);
+    if (items) results = items.map((item, i) => fromFileItem(item, i, args, kernel));
+  }
+  if (!results) {
+    const datasets = readDatasets(bytes.toString('utf8'));
+    if (typeof datasets === 'string') {
+      process.stderr.write(`bellwether fit: ${args.file} is not a datasets file: ${datasets}\n`);
+      return 1;
+    }
+    t0 = performance.now();
+    results = datasets.map((d) => fitOne(d, args, kernel));
+  }
   const loop = (performance.now() - t0) / 1000;
   const engine = { name: 'bellwether', version: ENGINE_VERSION, model: args.model };
   process.stdout.write(JSON.stringify({ engine, results }) + '\n');
   if (args.timing) {
-    const rate = loop > 0 ? Math.round(datasets.length / loop) : 0;
-    process.stderr.write(`fit_loop_s=${loop.toFixed(4)} n=${datasets.length} fits_per_s=${rate}\n`);
+    const rate = loop > 0 ? Math.round(results.length / loop) : 0;
+    process.stderr.write(`fit_loop_s=${loop.toFixed(4)} n=${results.length} fits_per_s=${rate}\n`);
   }
   return 0;
 }

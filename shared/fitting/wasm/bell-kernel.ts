@@ -28,6 +28,14 @@ export interface BellSummary {
   iterations: number;
 }
 
+/** One dataset of a file read by the kernel, in the file's order. */
+export type FileItem =
+  | { kind: 'fit'; id: string; summary: BellSummary }
+  /** no starting point could be evaluated (the engine's 'bad_start'); n points */
+  | { kind: 'no_start'; id: string; n: number }
+  /** left to the engine: the dataset's JSON text, for JSON.parse */
+  | { kind: 'engine'; text: string };
+
 export interface BellKernel {
   /** profiles with more points than this are left to the engine */
   readonly maxPoints: number;
@@ -37,6 +45,14 @@ export interface BellKernel {
    * than maxPoints).
    */
   fit(input: ProfileInput): BellSummary | 'no_start' | null;
+  /**
+   * Every dataset of a datasets file (the reference README's format) given as its bytes, read
+   * without JSON.parse; null when the file is not one the kernel reads (not valid JSON, not ASCII,
+   * no "datasets" array of objects, …): the caller reads it with JSON.parse.
+   */
+  fitFile(bytes: Uint8Array): FileItem[] | null;
+  /** For tests: a JSON number as the kernel converts it; NaN when it leaves it to JSON.parse. */
+  convertNumber(text: string): number;
 }
 
 /** Flag codes by bit, in the order flags.ts lists them. */
@@ -66,6 +82,17 @@ interface Exports {
   logFactPtr(): number;
   outPtr(): number;
   fitProfile(n: number, hasWeights: boolean): number;
+  textBuffer(length: number): number;
+  scanDatasets(): number;
+  nextDataset(): number;
+  fitCurrent(): number;
+  convertNumber(): number;
+  currentObjStart(): number;
+  currentObjEnd(): number;
+  currentIdKind(): number;
+  currentIdStart(): number;
+  currentIdEnd(): number;
+  currentPoints(): number;
 }
 
 function decode(base64: string): Uint8Array<ArrayBuffer> {
@@ -75,27 +102,86 @@ function decode(base64: string): Uint8Array<ArrayBuffer> {
   return bytes;
 }
 
+const decoder = new TextDecoder();
+/** Text of ASCII bytes (ids and datasets the kernel has checked): short ones without a decoder call. */
+const ascii = (bytes: Uint8Array): string =>
+  bytes.length <= 256 ? String.fromCharCode.apply(null, bytes as unknown as number[]) : decoder.decode(bytes);
+
 function instantiate(): BellKernel {
   const module = new WebAssembly.Module(decode(BELL_WASM_BASE64));
+  // log k! as runs-test.ts computes it, filled as far as the kernel has asked
+  let logFact = new Float64Array(0);
+  let logFactUpTo = 0;
   const instance = new WebAssembly.Instance(module, {
     env: {
       abort() {
         throw new Error('the bell kernel stopped on an internal check');
       },
       t975: (dof: number) => t975(dof) ?? NaN,
+      needLogFactorials(k: number) {
+        if (k <= logFactUpTo) return;
+        views();
+        while (logFactUpTo < k) {
+          logFactUpTo++;
+          logFact[logFactUpTo] = gammaln(logFactUpTo + 1);
+        }
+      },
     },
   });
   const x = instance.exports as unknown as Exports;
   const maxPoints = x.maxPoints();
-  // the kernel allocates nothing after start-up, so these views stay valid
-  const f64 = (ptr: number, length: number) => new Float64Array(x.memory.buffer, ptr, length);
-  const pH = f64(x.pHPtr(), maxPoints);
-  const v = f64(x.vPtr(), maxPoints);
-  const w = f64(x.wPtr(), maxPoints);
-  const out = f64(x.outPtr(), 20);
-  // log k! as runs-test.ts computes it, filled as far as the longest profile so far
-  const logFact = f64(x.logFactPtr(), maxPoints + 1);
-  let logFactUpTo = 0;
+  // views on the kernel's memory, made again when a file's bytes have made the memory grow
+  let buffer: ArrayBuffer | null = null;
+  let pH = new Float64Array(0);
+  let v = new Float64Array(0);
+  let w = new Float64Array(0);
+  let out = new Float64Array(0);
+  function views(): void {
+    if (buffer === x.memory.buffer) return;
+    buffer = x.memory.buffer;
+    const f64 = (ptr: number, length: number) => new Float64Array(buffer as ArrayBuffer, ptr, length);
+    pH = f64(x.pHPtr(), maxPoints);
+    v = f64(x.vPtr(), maxPoints);
+    w = f64(x.wPtr(), maxPoints);
+    out = f64(x.outPtr(), 20);
+    logFact = f64(x.logFactPtr(), maxPoints + 1);
+  }
+  views();
+
+  /** The summary in `out` after a fit that returned 0. */
+  function summary(): BellSummary {
+    // status 0: fitted; a parameter held far away or not determined is reported as null
+    const se = {
+      V: out[3] === 0 ? finiteOrNull(out[6]) : null,
+      pKa1: out[4] === 0 ? finiteOrNull(out[7]) : null,
+      pKa2: out[5] === 0 ? finiteOrNull(out[8]) : null,
+    };
+    const bits = out[14];
+    const flags: string[] = [];
+    for (let b = 0; b < FLAG_BITS.length; b++) if (bits & (1 << b)) flags.push(FLAG_BITS[b]);
+    return {
+      n: out[18],
+      dof: out[13],
+      V: out[3] === 0 ? finiteOrNull(out[0]) : null,
+      pKa1: out[4] === 0 ? finiteOrNull(out[1]) : null,
+      pKa2: out[5] === 0 ? finiteOrNull(out[2]) : null,
+      se,
+      pHopt: finiteOrNull(out[9]),
+      pHoptSe: finiteOrNull(out[10]),
+      ssr: finiteOrNull(out[11]),
+      converged: out[12] === 1,
+      flags,
+      starts: out[15],
+      iterations: out[16],
+    };
+  }
+
+  /** Copies bytes into the kernel's text buffer. */
+  function load(bytes: Uint8Array): void {
+    const ptr = x.textBuffer(bytes.length);
+    new Uint8Array(x.memory.buffer, ptr, bytes.length).set(bytes);
+    views();
+  }
 
   return {
     maxPoints,
@@ -107,6 +193,7 @@ function instantiate(): BellKernel {
       if (n === 0 || n > maxPoints || ys.length !== n) return null;
       const weighted = ws !== undefined && ws !== null;
       if (weighted && (!Array.isArray(ws) || ws.length !== n)) return null;
+      views();
       for (let i = 0; i < n; i++) {
         const a = xs[i];
         const b = ys[i];
@@ -121,40 +208,38 @@ function instantiate(): BellKernel {
           w[i] = c;
         }
       }
-      while (logFactUpTo < n) {
-        logFactUpTo++;
-        logFact[logFactUpTo] = gammaln(logFactUpTo + 1);
-      }
       const code = x.fitProfile(n, weighted);
       if (code === 2) return null;
       if (code === 1) return 'no_start';
-      // status 0: fitted; a parameter held far away or not determined is reported as null
-      const V = out[3] === 0 ? finiteOrNull(out[0]) : null;
-      const pKa1 = out[4] === 0 ? finiteOrNull(out[1]) : null;
-      const pKa2 = out[5] === 0 ? finiteOrNull(out[2]) : null;
-      const se = {
-        V: out[3] === 0 ? finiteOrNull(out[6]) : null,
-        pKa1: out[4] === 0 ? finiteOrNull(out[7]) : null,
-        pKa2: out[5] === 0 ? finiteOrNull(out[8]) : null,
-      };
-      const bits = out[14];
-      const flags: string[] = [];
-      for (let b = 0; b < FLAG_BITS.length; b++) if (bits & (1 << b)) flags.push(FLAG_BITS[b]);
-      return {
-        n: out[18],
-        dof: out[13],
-        V,
-        pKa1,
-        pKa2,
-        se,
-        pHopt: finiteOrNull(out[9]),
-        pHoptSe: finiteOrNull(out[10]),
-        ssr: finiteOrNull(out[11]),
-        converged: out[12] === 1,
-        flags,
-        starts: out[15],
-        iterations: out[16],
-      };
+      return summary();
+    },
+    fitFile(bytes) {
+      load(bytes);
+      const count = x.scanDatasets();
+      if (count < 0) return null;
+      const items: FileItem[] = [];
+      for (let i = 0; i < count; i++) {
+        let code = x.nextDataset();
+        if (code === 0) code = x.fitCurrent();
+        if (code === 2) {
+          items.push({ kind: 'engine', text: ascii(bytes.subarray(x.currentObjStart(), x.currentObjEnd())) });
+          continue;
+        }
+        const kind = x.currentIdKind();
+        const idText = kind === 0 ? '' : ascii(bytes.subarray(x.currentIdStart(), x.currentIdEnd()));
+        // as the engine's reader names a dataset: a string as it is, a number as JavaScript prints it
+        const id = kind === 1 ? idText : kind === 2 ? String(Number(idText)) : `#${i + 1}`;
+        items.push(
+          code === 1
+            ? { kind: 'no_start', id, n: x.currentPoints() }
+            : { kind: 'fit', id, summary: summary() },
+        );
+      }
+      return items;
+    },
+    convertNumber(text) {
+      load(new TextEncoder().encode(text));
+      return x.convertNumber();
     },
   };
 }

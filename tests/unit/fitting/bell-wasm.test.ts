@@ -248,3 +248,192 @@ describe('bell kernel in WebAssembly', () => {
     );
   });
 });
+
+// The kernel reads datasets files from their bytes (fitFile). Reference: JSON.parse, the reader
+// the command line uses otherwise; RFC 8259 for what a JSON text is.
+describe('datasets files read by the bell kernel', () => {
+  const encode = (text: string) => new TextEncoder().encode(text);
+  const nameOf = (id: unknown, i: number) =>
+    typeof id === 'string' || typeof id === 'number' ? String(id) : `#${i + 1}`;
+
+  /** fitFile's items against JSON.parse of the same text; false when fitFile left the file alone. */
+  function sameAsJsonParse(text: string): boolean {
+    const items = kernel!.fitFile(encode(text));
+    if (items === null) return false;
+    const parsed = JSON.parse(text) as { datasets: Record<string, unknown>[] };
+    expect(items.length).toBe(parsed.datasets.length);
+    items.forEach((item, i) => {
+      const d = parsed.datasets[i];
+      if (item.kind === 'engine') {
+        expect(JSON.parse(item.text)).toEqual(d);
+        return;
+      }
+      expect(item.id).toBe(nameOf(d.id, i));
+      const direct = kernel!.fit(d as unknown as ProfileInput);
+      if (item.kind === 'no_start') expect(direct).toBe('no_start');
+      else expect(item.summary).toEqual(direct); // the same numbers read, so the same fit exactly
+    });
+    return true;
+  }
+
+  it('reads bell-5000 exactly as JSON.parse does', () => {
+    const text = readFileSync(new URL('../../fixtures/reference/bell-5000.json', import.meta.url), 'utf8');
+    const items = kernel!.fitFile(encode(text));
+    expect(items?.every((item) => item.kind === 'fit')).toBe(true);
+    expect(sameAsJsonParse(text)).toBe(true);
+  });
+
+  it('converts numbers exactly as JSON.parse does, or leaves them to it', () => {
+    let converted = 0;
+    const check = (text: string) => {
+      const x = kernel!.convertNumber(text);
+      if (Number.isNaN(x)) return;
+      converted++;
+      expect(Object.is(x, JSON.parse(text)), `${text}: ${x} against ${JSON.parse(text)}`).toBe(true);
+    };
+    // numbers as JavaScript prints them (shortest round trip), and as people and instruments write
+    fc.assert(
+      fc.property(fc.double({ noNaN: true, noDefaultInfinity: true }), (d) => check(JSON.stringify(d))),
+    );
+    const decimal = fc
+      .tuple(
+        fc.boolean(),
+        fc.stringMatching(/^(0|[1-9][0-9]{0,17})$/),
+        fc.option(fc.stringMatching(/^[0-9]{1,18}$/)),
+        fc.option(fc.tuple(fc.constantFrom('e', 'E', 'e+', 'e-', 'E-'), fc.integer({ min: 0, max: 330 }))),
+      )
+      .map(
+        ([minus, int, frac, exp]) =>
+          `${minus ? '-' : ''}${int}${frac === null ? '' : `.${frac}`}${exp === null ? '' : `${exp[0]}${exp[1]}`}`,
+      );
+    fc.assert(fc.property(decimal, check), { numRuns: 5000 });
+    for (const text of [
+      '2.69',
+      '-0.677',
+      '113.837',
+      '0',
+      '-0',
+      '1e22',
+      '9007199254740993',
+      '0.1',
+      '1E-7',
+      '123456789012345',
+    ])
+      check(text);
+    expect(converted).toBeGreaterThan(1000);
+    // and what plate readers and people write (up to 15 significant digits, small exponents) is
+    // always converted here, never left to JSON.parse
+    const everyday = fc
+      .tuple(fc.boolean(), fc.integer({ min: 0, max: 999_999_999 }), fc.integer({ min: 0, max: 6 }))
+      .map(([minus, digits, decimals]) => (minus ? -1 : 1) * (digits / 10 ** decimals))
+      .map((x) => JSON.stringify(x));
+    fc.assert(fc.property(everyday, (text) => !Number.isNaN(kernel!.convertNumber(text))));
+    // not JSON numbers: never converted
+    for (const text of ['01', '1.', '.5', '+1', '1e', '--1', '0x10', 'NaN', '1 ', ''])
+      expect(kernel!.convertNumber(text), text).toBeNaN();
+  });
+
+  it('gives JSON.parse every file it does not read, and what it reads is read as JSON.parse does', () => {
+    const base = JSON.stringify({
+      note: 'generated for this test',
+      datasets: [
+        { id: 'a', pH: [4, 5, 6, 7, 8, 9], v: [1.5, 3.25, 4, 3.5, 1.25, 0.5], truth: { V: 5, pKa: [5, 8] } },
+        { id: 12.5, pH: [3, 4, 5, 6], v: [1, 2, 2.5, 2.6], w: [1, 0.5, 2, 1] },
+        { pH: [5, 6, 7], v: [1, 2, 1], w: null, design: ['x', true, null, -1e-3] },
+      ],
+      after: [{}, [], ''],
+    });
+    expect(sameAsJsonParse(base)).toBe(true);
+    // single edits of a valid file: whatever fitFile accepts, JSON.parse reads the same way
+    const alphabet = [
+      '{',
+      '}',
+      '[',
+      ']',
+      ',',
+      ':',
+      '"',
+      '\\',
+      ' ',
+      '\n',
+      '0',
+      '5',
+      '-',
+      '.',
+      'e',
+      'n',
+      't',
+      'u',
+      'l',
+      'x',
+      'é',
+    ];
+    const edit = fc.tuple(
+      fc.integer({ min: 0, max: base.length - 1 }),
+      fc.constantFrom('insert', 'delete', 'replace'),
+      fc.constantFrom(...alphabet),
+    );
+    let accepted = 0;
+    fc.assert(
+      fc.property(fc.array(edit, { minLength: 1, maxLength: 3 }), (edits) => {
+        let text = base;
+        for (const [at, op, c] of edits) {
+          const i = at % text.length;
+          text =
+            op === 'insert'
+              ? text.slice(0, i) + c + text.slice(i)
+              : op === 'delete'
+                ? text.slice(0, i) + text.slice(i + 1)
+                : text.slice(0, i) + c + text.slice(i + 1);
+        }
+        let valid = true;
+        try {
+          JSON.parse(text);
+        } catch {
+          valid = false;
+        }
+        const items = kernel!.fitFile(encode(text));
+        if (items === null) return true;
+        expect(valid, `accepted a text JSON.parse refuses: ${text}`).toBe(true);
+        accepted++;
+        return sameAsJsonParse(text);
+      }),
+      { numRuns: 3000, seed: 20261202 },
+    );
+    expect(accepted).toBeGreaterThan(100);
+    // random JSON documents: accepted only when they are datasets files JSON.parse reads the same
+    fc.assert(
+      fc.property(fc.json({ depthSize: 'medium' }), (text) => {
+        const items = kernel!.fitFile(encode(text));
+        if (items === null) return true;
+        const parsed = JSON.parse(text) as { datasets?: unknown };
+        return Array.isArray(parsed?.datasets) && sameAsJsonParse(text);
+      }),
+      { numRuns: 1000, seed: 7 },
+    );
+  });
+
+  it('leaves alone files it does not read: not ASCII, deeply nested, escaped keys, repeated datasets', () => {
+    const ok = { pH: [4, 5, 6], v: [1, 2, 1] };
+    const deep = '['.repeat(600) + ']'.repeat(600);
+    for (const text of [
+      JSON.stringify({ datasets: [ok], note: 'pH 7·5' }),
+      `{"datasets":[${JSON.stringify(ok)}],"x":${deep}}`,
+      `{"data\\u0073ets":[${JSON.stringify(ok)}]}`,
+      `{"datasets":[],"datasets":[${JSON.stringify(ok)}]}`,
+      `{"datasets":[${JSON.stringify(ok)}, 5]}`,
+      `{"datasets":{}}`,
+      `[]`,
+      `{"datasets":[${JSON.stringify(ok)}]} x`,
+    ])
+      expect(kernel!.fitFile(encode(text)), text.slice(0, 60)).toBeNull();
+    // a dataset it does not take itself goes back whole, for the engine
+    const items = kernel!.fitFile(
+      encode(
+        `{"datasets":[{"id":"a\\"b","pH":[4,5,6],"v":[1,2,1]},{"id":"c","pH":[4,5,6],"pH":[4,5,7],"v":[1,2,1]},` +
+          `{"id":"d","pH":[4,5,6],"v":[1,"2",1]},{"id":"e","pH":[4,5,6],"v":[1,2,1.00000000000000000001]}]}`,
+      ),
+    );
+    expect(items?.map((item) => item.kind)).toEqual(['engine', 'engine', 'engine', 'engine']);
+  });
+});

@@ -133,10 +133,22 @@ describe('bellwether fit', () => {
       { id: 'text', pH: [4, 5, 6, 7], v: [1, '2', 3, 4] },
       { ...pick('s1-00000'), id: 'weighted', w: pick('s1-00000').pH.map((x) => (x < 5 ? 0 : 2)) },
       { id: 'long', pH: long, v: long.map((x) => 100 / (1 + 10 ** (5 - x) + 10 ** (x - 8))) },
+      // ids as the reader names them: a number as JavaScript prints it, an escaped string, none
+      { ...pick('s1-00001'), id: 7.5 },
+      { ...pick('s1-00002'), id: 'a "quoted" id' },
+      { pH: pick('s1-00003').pH, v: pick('s1-00003').v },
     ];
+    // the kernel reads the ASCII file from its bytes; the other (one character that is not ASCII)
+    // goes through JSON.parse
     const path = file('compare.json', JSON.stringify({ datasets }));
-    const [wasm, js] = await Promise.all([fit([path]), fit([path], { BELLWETHER_FIT_ENGINE: 'js' })]);
-    expect([wasm.code, js.code]).toEqual([0, 0]);
+    const other = file('compare-utf8.json', JSON.stringify({ note: 'pH 7·5', datasets }));
+    const [wasm, js, utf8] = await Promise.all([
+      fit([path]),
+      fit([path], { BELLWETHER_FIT_ENGINE: 'js' }),
+      fit([other]),
+    ]);
+    expect([wasm.code, js.code, utf8.code]).toEqual([0, 0, 0]);
+    expect(utf8.stdout).toBe(wasm.stdout);
     // the two round differently in the last digits, so identical outputs would mean the kernel
     // never ran
     expect(wasm.stdout).not.toBe(js.stdout);

@@ -10,10 +10,11 @@
 // Build: `npm run build:wasm` (writes ../bell-wasm.ts); a test checks the committed build is current.
 //
 // Memory: the caller writes one profile's pH values, activities and (optionally) weights into the
-// input arrays, fills the table of log k! up to the number of points, calls fitProfile and reads
-// `out`. Student's t quantiles come from the caller through the imported function t975, asked only
-// when a flag needs one. A profile that prepareProfile (ph-data.ts) would refuse is not fitted:
-// fitProfile returns 2 and the caller lets the engine say why.
+// input arrays, calls fitProfile and reads `out`; or it hands over a whole datasets file (see the
+// end of this file). The table of log k! is filled by the caller when asked (needLogFactorials);
+// Student's t quantiles come from the caller through t975, asked only when a flag needs one. A
+// profile that prepareProfile (ph-data.ts) would refuse is not fitted: the caller lets the engine
+// say why.
 
 const MAXN: i32 = 4096;
 const P: i32 = 3;
@@ -60,6 +61,9 @@ const F_RUNS: i32 = 512;
 // Student's t 97.5 % quantile for ν degrees of freedom (NaN when there is none), from the caller
 @external("env", "t975")
 declare function t975(dof: i32): f64;
+// asks the caller to fill logFact up to k (log k! as runs-test.ts computes it)
+@external("env", "needLogFactorials")
+declare function needLogFactorials(k: i32): void;
 
 const inPH = new StaticArray<f64>(MAXN);
 const inV = new StaticArray<f64>(MAXN);
@@ -783,6 +787,7 @@ function probRuns(r: i32, n1: i32, n2: i32): f64 {
 
 /** P(R ≤ observed runs) of the residuals y − f in order of pH; NaN when the test does not apply. */
 function runsPValue(): f64 {
+  needLogFactorials(n);
   let count = 0;
   let sorted = true;
   for (let i = 0; i < n; i++) {
@@ -977,4 +982,473 @@ export function fitProfile(count: i32, hasWeights: bool): i32 {
   unchecked((out[17] = <f64>runStop));
   unchecked((out[18] = <f64>nUsed));
   return 0;
+}
+
+// ---- datasets files read without JSON.parse ------------------------------------------------------
+// The command line's input (the reference README's datasets format) is read here from its bytes:
+// parsing it in JavaScript builds every value of the file, most of which a fit never looks at. The
+// reader takes only what it can take exactly; everything else goes back to the caller, which uses
+// JSON.parse as before:
+//   - the whole file is checked against the JSON grammar first (RFC 8259); any doubt (not ASCII,
+//     nesting deeper than MAX_DEPTH, a key written with escapes, "datasets" twice, a dataset that is
+//     not an object) and scanDatasets returns −1;
+//   - a dataset whose pH, v or w is not a plain array of numbers, whose id is written with escapes,
+//     which repeats a key, or holds a number that cannot be converted exactly here, is handed back
+//     whole (code 2) for JSON.parse and the engine;
+//   - numbers are converted exactly (correctly rounded, as JSON.parse does) when they have at most
+//     15 significant digits and a decimal exponent within ±22 (Clinger 1990: one exact integer, one
+//     exact power of ten, one rounding); others are handed back.
+
+const MAX_DEPTH: i32 = 512;
+let text: usize = 0;
+let textLen: i32 = 0;
+let textCapacity: i32 = 0;
+let pos: i32 = 0;
+let escaped: bool = false;
+let datasetsArray: i32 = -1;
+let datasetIndex: i32 = 0;
+const depthStack = new StaticArray<u8>(MAX_DEPTH);
+
+// spans of the current dataset, read by the caller
+let objStart: i32 = 0;
+let objEnd: i32 = 0;
+let idKind: i32 = 0; // 0 none (the caller names it by position), 1 string, 2 number
+let idStart: i32 = 0;
+let idEnd: i32 = 0;
+let pHStart: i32 = -1;
+let vStart: i32 = -1;
+let wStart: i32 = -1;
+let pointCount: i32 = 0;
+
+/** A buffer for the file's bytes, reused while large enough. */
+export function textBuffer(length: i32): usize {
+  if (length > textCapacity) {
+    text = heap.alloc(<usize>length);
+    textCapacity = length;
+  }
+  textLen = length;
+  return text;
+}
+
+export function currentObjStart(): i32 {
+  return objStart;
+}
+export function currentObjEnd(): i32 {
+  return objEnd;
+}
+export function currentIdKind(): i32 {
+  return idKind;
+}
+export function currentIdStart(): i32 {
+  return idStart;
+}
+export function currentIdEnd(): i32 {
+  return idEnd;
+}
+export function currentPoints(): i32 {
+  return pointCount;
+}
+
+@inline function byteAt(i: i32): i32 {
+  return <i32>load<u8>(text + <usize>i);
+}
+
+@inline function isDigit(c: i32): bool {
+  return c >= 0x30 && c <= 0x39;
+}
+
+function skipWhitespace(): void {
+  while (pos < textLen) {
+    const c = byteAt(pos);
+    if (c == 0x20 || c == 0x0a || c == 0x0d || c == 0x09) pos++;
+    else break;
+  }
+}
+
+/** A string at pos (on its opening quote); sets `escaped` when it holds an escape. */
+function skipString(): bool {
+  pos++;
+  escaped = false;
+  while (pos < textLen) {
+    const c = byteAt(pos);
+    if (c == 0x22) {
+      pos++;
+      return true;
+    }
+    if (c < 0x20 || c >= 0x80) return false;
+    if (c == 0x5c) {
+      escaped = true;
+      if (pos + 1 >= textLen) return false;
+      const e = byteAt(pos + 1);
+      if (e == 0x75) {
+        if (pos + 5 >= textLen) return false;
+        for (let k = 2; k <= 5; k++) {
+          const h = byteAt(pos + k);
+          if (!(isDigit(h) || (h >= 0x61 && h <= 0x66) || (h >= 0x41 && h <= 0x46))) return false;
+        }
+        pos += 6;
+        continue;
+      }
+      if (e == 0x22 || e == 0x5c || e == 0x2f || e == 0x62 || e == 0x66 || e == 0x6e || e == 0x72 || e == 0x74) {
+        pos += 2;
+        continue;
+      }
+      return false;
+    }
+    pos++;
+  }
+  return false;
+}
+
+/** A number at pos, by the JSON grammar: -?(0|[1-9][0-9]*)(.[0-9]+)?([eE][+-]?[0-9]+)? */
+function skipNumber(): bool {
+  if (pos < textLen && byteAt(pos) == 0x2d) pos++;
+  if (pos >= textLen) return false;
+  const c = byteAt(pos);
+  if (c == 0x30) pos++;
+  else if (c >= 0x31 && c <= 0x39) {
+    while (pos < textLen && isDigit(byteAt(pos))) pos++;
+  } else return false;
+  if (pos < textLen && byteAt(pos) == 0x2e) {
+    pos++;
+    if (!(pos < textLen && isDigit(byteAt(pos)))) return false;
+    while (pos < textLen && isDigit(byteAt(pos))) pos++;
+  }
+  if (pos < textLen && (byteAt(pos) == 0x65 || byteAt(pos) == 0x45)) {
+    pos++;
+    if (pos < textLen && (byteAt(pos) == 0x2b || byteAt(pos) == 0x2d)) pos++;
+    if (!(pos < textLen && isDigit(byteAt(pos)))) return false;
+    while (pos < textLen && isDigit(byteAt(pos))) pos++;
+  }
+  return true;
+}
+
+function skipLiteral(word: string): bool {
+  const n = word.length;
+  if (pos + n > textLen) return false;
+  for (let k = 0; k < n; k++) if (byteAt(pos + k) != word.charCodeAt(k)) return false;
+  pos += n;
+  return true;
+}
+
+/** `"key"` then `:` (whitespace allowed around the colon). */
+function skipKey(): bool {
+  skipWhitespace();
+  if (pos >= textLen || byteAt(pos) != 0x22 || !skipString()) return false;
+  skipWhitespace();
+  if (pos >= textLen || byteAt(pos) != 0x3a) return false;
+  pos++;
+  return true;
+}
+
+/** Any JSON value at pos, checked against the grammar without recursion. */
+function skipValue(): bool {
+  let depth = 0;
+  for (;;) {
+    skipWhitespace();
+    if (pos >= textLen) return false;
+    const c = byteAt(pos);
+    let opened = false;
+    if (c == 0x7b || c == 0x5b) {
+      pos++;
+      skipWhitespace();
+      if (pos < textLen && byteAt(pos) == (c == 0x7b ? 0x7d : 0x5d)) {
+        pos++;
+      } else {
+        if (depth >= MAX_DEPTH) return false;
+        unchecked((depthStack[depth++] = <u8>c));
+        if (c == 0x7b && !skipKey()) return false;
+        opened = true;
+      }
+    } else if (c == 0x22) {
+      if (!skipString()) return false;
+    } else if (c == 0x2d || isDigit(c)) {
+      if (!skipNumber()) return false;
+    } else if (c == 0x74) {
+      if (!skipLiteral('true')) return false;
+    } else if (c == 0x66) {
+      if (!skipLiteral('false')) return false;
+    } else if (c == 0x6e) {
+      if (!skipLiteral('null')) return false;
+    } else return false;
+    if (opened) continue;
+    // after a value: close containers, or a comma and the next member
+    for (;;) {
+      if (depth == 0) return true;
+      skipWhitespace();
+      if (pos >= textLen) return false;
+      const d = byteAt(pos);
+      const top = <i32>unchecked(depthStack[depth - 1]);
+      if (d == 0x2c) {
+        pos++;
+        if (top == 0x7b && !skipKey()) return false;
+        break;
+      }
+      if ((top == 0x7b && d == 0x7d) || (top == 0x5b && d == 0x5d)) {
+        pos++;
+        depth--;
+        continue;
+      }
+      return false;
+    }
+  }
+  return false; // not reached: every path above returns
+}
+
+/** Whether the string just skipped (from start, on its quote) spells `word` exactly. */
+function spells(start: i32, word: string): bool {
+  const n = word.length;
+  if (pos - start != n + 2) return false;
+  for (let k = 0; k < n; k++) if (byteAt(start + 1 + k) != word.charCodeAt(k)) return false;
+  return true;
+}
+
+/**
+ * Checks the whole file in the text buffer; returns the number of datasets, or −1 when the
+ * caller should read the file with JSON.parse (not valid JSON, or not a file read here).
+ */
+export function scanDatasets(): i32 {
+  pos = 0;
+  datasetsArray = -1;
+  skipWhitespace();
+  if (pos >= textLen || byteAt(pos) != 0x7b) return -1;
+  pos++;
+  skipWhitespace();
+  let count = 0;
+  if (pos < textLen && byteAt(pos) == 0x7d) {
+    pos++;
+  } else {
+    for (;;) {
+      skipWhitespace();
+      const keyStart = pos;
+      if (pos >= textLen || byteAt(pos) != 0x22 || !skipString() || escaped) return -1;
+      const isDatasets = spells(keyStart, 'datasets');
+      skipWhitespace();
+      if (pos >= textLen || byteAt(pos) != 0x3a) return -1;
+      pos++;
+      skipWhitespace();
+      if (isDatasets) {
+        if (datasetsArray >= 0 || pos >= textLen || byteAt(pos) != 0x5b) return -1;
+        datasetsArray = pos;
+        pos++;
+        skipWhitespace();
+        if (pos < textLen && byteAt(pos) == 0x5d) {
+          pos++;
+        } else {
+          for (;;) {
+            skipWhitespace();
+            if (pos >= textLen || byteAt(pos) != 0x7b || !skipValue()) return -1;
+            count++;
+            skipWhitespace();
+            if (pos >= textLen) return -1;
+            if (byteAt(pos) == 0x2c) {
+              pos++;
+              continue;
+            }
+            if (byteAt(pos) != 0x5d) return -1;
+            pos++;
+            break;
+          }
+        }
+      } else if (!skipValue()) return -1;
+      skipWhitespace();
+      if (pos >= textLen) return -1;
+      if (byteAt(pos) == 0x2c) {
+        pos++;
+        continue;
+      }
+      if (byteAt(pos) != 0x7d) return -1;
+      pos++;
+      break;
+    }
+  }
+  skipWhitespace();
+  if (pos != textLen || datasetsArray < 0) return -1;
+  pos = datasetsArray + 1;
+  datasetIndex = 0;
+  return count;
+}
+
+/**
+ * Moves to the next dataset (the file has been checked by scanDatasets) and notes its spans.
+ * Returns 0 when it can be fitted here, 2 when it goes to JSON.parse and the engine.
+ */
+export function nextDataset(): i32 {
+  skipWhitespace();
+  if (datasetIndex > 0) {
+    pos++; // the comma
+    skipWhitespace();
+  }
+  datasetIndex++;
+  objStart = pos;
+  idKind = 0;
+  pHStart = -1;
+  vStart = -1;
+  wStart = -1;
+  let plain = true;
+  let seen = 0; // bits: id, pH, v, w
+  pos++;
+  skipWhitespace();
+  if (byteAt(pos) == 0x7d) {
+    pos++;
+    objEnd = pos;
+    return 2;
+  }
+  for (;;) {
+    skipWhitespace();
+    const keyStart = pos;
+    skipString();
+    let key = 0;
+    if (escaped) plain = false;
+    else if (spells(keyStart, 'id')) key = 1;
+    else if (spells(keyStart, 'pH')) key = 2;
+    else if (spells(keyStart, 'v')) key = 4;
+    else if (spells(keyStart, 'w')) key = 8;
+    if (key != 0 && (seen & key) != 0) plain = false; // JSON.parse keeps the last: left to it
+    seen |= key;
+    skipWhitespace();
+    pos++; // the colon
+    skipWhitespace();
+    const valueStart = pos;
+    const c = byteAt(pos);
+    skipValue();
+    if (key == 1) {
+      if (c == 0x22) {
+        if (escaped) plain = false;
+        idKind = 1;
+        idStart = valueStart + 1;
+        idEnd = pos - 1;
+      } else if (c == 0x2d || isDigit(c)) {
+        idKind = 2;
+        idStart = valueStart;
+        idEnd = pos;
+      } else idKind = 0;
+    } else if (key == 2) pHStart = valueStart;
+    else if (key == 4) vStart = valueStart;
+    else if (key == 8) wStart = c == 0x6e ? -1 : valueStart; // w: null means no weights
+    skipWhitespace();
+    // a comma and the next member, or the closing brace
+    pos++;
+    if (byteAt(pos - 1) != 0x2c) break;
+  }
+  objEnd = pos;
+  if (!plain || pHStart < 0 || vStart < 0) return 2;
+  return 0;
+}
+
+const POW10 = StaticArray.fromArray<f64>([
+  1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17,
+  1e18, 1e19, 1e20, 1e21, 1e22,
+]);
+
+/** The number at pos (already checked), converted exactly; NaN when that is not possible here. */
+function readNumber(): f64 {
+  let negative = false;
+  if (byteAt(pos) == 0x2d) {
+    negative = true;
+    pos++;
+  }
+  let mantissa: u64 = 0;
+  let digits = 0; // significant digits taken into the mantissa
+  let exponent: i32 = 0;
+  let exact = true;
+  while (pos < textLen && isDigit(byteAt(pos))) {
+    const d = <u64>(byteAt(pos) - 0x30);
+    if (mantissa != 0 || d != 0) {
+      if (digits < 15) {
+        mantissa = mantissa * 10 + d;
+        digits++;
+      } else {
+        exact = false;
+      }
+    }
+    pos++;
+  }
+  if (pos < textLen && byteAt(pos) == 0x2e) {
+    pos++;
+    while (pos < textLen && isDigit(byteAt(pos))) {
+      const d = <u64>(byteAt(pos) - 0x30);
+      if (mantissa != 0 || d != 0) {
+        if (digits < 15) {
+          mantissa = mantissa * 10 + d;
+          digits++;
+          exponent--;
+        } else if (d != 0) exact = false;
+      } else exponent--;
+      pos++;
+    }
+  }
+  if (pos < textLen && (byteAt(pos) == 0x65 || byteAt(pos) == 0x45)) {
+    pos++;
+    let sign = 1;
+    if (byteAt(pos) == 0x2b) pos++;
+    else if (byteAt(pos) == 0x2d) {
+      sign = -1;
+      pos++;
+    }
+    let e = 0;
+    while (pos < textLen && isDigit(byteAt(pos))) {
+      if (e < 100000) e = e * 10 + (byteAt(pos) - 0x30);
+      pos++;
+    }
+    exponent += sign * e;
+  }
+  if (!exact) return NaN;
+  let value: f64;
+  if (mantissa == 0) value = 0;
+  else if (exponent >= 0 && exponent <= 22) value = <f64>mantissa * unchecked(POW10[exponent]);
+  else if (exponent < 0 && exponent >= -22) value = <f64>mantissa / unchecked(POW10[-exponent]);
+  else return NaN;
+  return negative ? -value : value;
+}
+
+/**
+ * The numbers of the array at `start` into `into`; the count, or −1 when the value is not an array
+ * of numbers only, has more than MAXN of them, or holds a number not converted exactly here.
+ */
+function readArray(start: i32, into: StaticArray<f64>): i32 {
+  pos = start;
+  if (byteAt(pos) != 0x5b) return -1;
+  pos++;
+  skipWhitespace();
+  if (byteAt(pos) == 0x5d) return 0;
+  let count = 0;
+  for (;;) {
+    skipWhitespace();
+    const c = byteAt(pos);
+    if (!(c == 0x2d || isDigit(c)) || count >= MAXN) return -1;
+    const x = readNumber();
+    if (isNaN(x)) return -1;
+    unchecked((into[count++] = x));
+    skipWhitespace();
+    if (byteAt(pos) == 0x2c) {
+      pos++;
+      continue;
+    }
+    return byteAt(pos) == 0x5d ? count : -1;
+  }
+}
+
+/**
+ * Fits the dataset nextDataset() has just noted: 0 fitted (read `out`), 1 no start could be
+ * evaluated, 2 left to JSON.parse and the engine (arrays that are not plain numbers, lengths that
+ * differ, more than MAXN points, or a profile the engine refuses).
+ */
+export function fitCurrent(): i32 {
+  const resume = pos;
+  const n = readArray(pHStart, inPH);
+  const nv = readArray(vStart, inV);
+  const nw = wStart >= 0 ? readArray(wStart, inW) : n;
+  pos = resume;
+  pointCount = n;
+  if (n < 1 || nv != n || nw != n) return 2;
+  return fitProfile(n, wStart >= 0);
+}
+
+/** For tests: the number at the start of the text buffer as readNumber converts it (NaN: not here). */
+export function convertNumber(): f64 {
+  pos = 0;
+  if (!skipNumber() || pos != textLen) return NaN;
+  pos = 0;
+  return readNumber();
 }
