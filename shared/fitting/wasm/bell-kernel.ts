@@ -84,15 +84,8 @@ interface Exports {
   fitProfile(n: number, hasWeights: boolean): number;
   textBuffer(length: number): number;
   scanDatasets(): number;
-  nextDataset(): number;
-  fitCurrent(): number;
+  fitNext(): number;
   convertNumber(): number;
-  currentObjStart(): number;
-  currentObjEnd(): number;
-  currentIdKind(): number;
-  currentIdStart(): number;
-  currentIdEnd(): number;
-  currentPoints(): number;
 }
 
 function decode(base64: string): Uint8Array<ArrayBuffer> {
@@ -143,7 +136,7 @@ function instantiate(): BellKernel {
     pH = f64(x.pHPtr(), maxPoints);
     v = f64(x.vPtr(), maxPoints);
     w = f64(x.wPtr(), maxPoints);
-    out = f64(x.outPtr(), 20);
+    out = f64(x.outPtr(), 32);
     logFact = f64(x.logFactPtr(), maxPoints + 1);
   }
   views();
@@ -219,20 +212,17 @@ function instantiate(): BellKernel {
       if (count < 0) return null;
       const items: FileItem[] = [];
       for (let i = 0; i < count; i++) {
-        let code = x.nextDataset();
-        if (code === 0) code = x.fitCurrent();
+        const code = x.fitNext();
         if (code === 2) {
-          items.push({ kind: 'engine', text: ascii(bytes.subarray(x.currentObjStart(), x.currentObjEnd())) });
+          items.push({ kind: 'engine', text: ascii(bytes.subarray(out[23], out[24])) });
           continue;
         }
-        const kind = x.currentIdKind();
-        const idText = kind === 0 ? '' : ascii(bytes.subarray(x.currentIdStart(), x.currentIdEnd()));
+        const kind = out[20];
+        const idText = kind === 0 ? '' : ascii(bytes.subarray(out[21], out[22]));
         // as the engine's reader names a dataset: a string as it is, a number as JavaScript prints it
         const id = kind === 1 ? idText : kind === 2 ? String(Number(idText)) : `#${i + 1}`;
         items.push(
-          code === 1
-            ? { kind: 'no_start', id, n: x.currentPoints() }
-            : { kind: 'fit', id, summary: summary() },
+          code === 1 ? { kind: 'no_start', id, n: out[25] } : { kind: 'fit', id, summary: summary() },
         );
       }
       return items;

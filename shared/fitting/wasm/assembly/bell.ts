@@ -73,7 +73,7 @@ const inY = new StaticArray<f64>(MAXN);
 const inSW = new StaticArray<f64>(MAXN);
 const inW = new StaticArray<f64>(MAXN);
 const logFact = new StaticArray<f64>(MAXN + 1);
-const out = new StaticArray<f64>(20);
+const out = new StaticArray<f64>(32);
 
 export function maxPoints(): i32 {
   return MAXN;
@@ -1009,7 +1009,7 @@ let datasetsArray: i32 = -1;
 let datasetIndex: i32 = 0;
 const depthStack = new StaticArray<u8>(MAX_DEPTH);
 
-// spans of the current dataset, read by the caller
+// spans of the current dataset (fitNext reports them)
 let objStart: i32 = 0;
 let objEnd: i32 = 0;
 let idKind: i32 = 0; // 0 none (the caller names it by position), 1 string, 2 number
@@ -1028,25 +1028,6 @@ export function textBuffer(length: i32): usize {
   }
   textLen = length;
   return text;
-}
-
-export function currentObjStart(): i32 {
-  return objStart;
-}
-export function currentObjEnd(): i32 {
-  return objEnd;
-}
-export function currentIdKind(): i32 {
-  return idKind;
-}
-export function currentIdStart(): i32 {
-  return idStart;
-}
-export function currentIdEnd(): i32 {
-  return idEnd;
-}
-export function currentPoints(): i32 {
-  return pointCount;
 }
 
 @inline function byteAt(i: i32): i32 {
@@ -1273,7 +1254,7 @@ export function scanDatasets(): i32 {
  * Moves to the next dataset (the file has been checked by scanDatasets) and notes its spans.
  * Returns 0 when it can be fitted here, 2 when it goes to JSON.parse and the engine.
  */
-export function nextDataset(): i32 {
+function nextDataset(): i32 {
   skipWhitespace();
   if (datasetIndex > 0) {
     pos++; // the comma
@@ -1434,7 +1415,7 @@ function readArray(start: i32, into: StaticArray<f64>): i32 {
  * evaluated, 2 left to JSON.parse and the engine (arrays that are not plain numbers, lengths that
  * differ, more than MAXN points, or a profile the engine refuses).
  */
-export function fitCurrent(): i32 {
+function fitCurrent(): i32 {
   const resume = pos;
   const n = readArray(pHStart, inPH);
   const nv = readArray(vStart, inV);
@@ -1443,6 +1424,24 @@ export function fitCurrent(): i32 {
   pointCount = n;
   if (n < 1 || nv != n || nw != n) return 2;
   return fitProfile(n, wStart >= 0);
+}
+
+/**
+ * The next dataset of the file scanDatasets has checked, fitted when it can be: the code of
+ * fitCurrent (2 also for a dataset nextDataset leaves to JSON.parse), with `out` holding besides
+ *   20 how the dataset names itself (0 not at all, 1 a string, 2 a number), 21–22 that name's
+ *   span in the text, 23–24 the dataset's span, 25 its number of points.
+ */
+export function fitNext(): i32 {
+  let code = nextDataset();
+  if (code == 0) code = fitCurrent();
+  unchecked((out[20] = <f64>idKind));
+  unchecked((out[21] = <f64>idStart));
+  unchecked((out[22] = <f64>idEnd));
+  unchecked((out[23] = <f64>objStart));
+  unchecked((out[24] = <f64>objEnd));
+  unchecked((out[25] = <f64>pointCount));
+  return code;
 }
 
 /** For tests: the number at the start of the text buffer as readNumber converts it (NaN: not here). */
