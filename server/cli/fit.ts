@@ -230,7 +230,12 @@ export async function run(argv: string[]): Promise<number> {
   let t0 = performance.now();
   if (kernel) {
     // the kernel reads the file itself; a file it does not read goes to JSON.parse below
-    const items = kernel.fitFile(bytes);
+    let items: FileItem[] | null;
+    try {
+      items = kernel.fitFile(bytes);
+    } catch {
+      items = null; // an unexpected stop of the kernel: the file is read and fitted as below
+    }
     if (items) results = items.map((item, i) => fromFileItem(item, i, args, kernel));
   }
   if (!results) {
