@@ -230,13 +230,14 @@ export async function run(argv: string[]): Promise<number> {
   let t0 = performance.now();
   if (kernel) {
     // the kernel reads the file itself; a file it does not read goes to JSON.parse below
-    let items: FileItem[] | null;
+    const records: Record<string, unknown>[] = [];
+    let read: boolean;
     try {
-      items = kernel.fitFile(bytes);
+      read = kernel.fitFile(bytes, (item, i) => records.push(fromFileItem(item, i, args, kernel)));
     } catch {
-      items = null; // an unexpected stop of the kernel: the file is read and fitted as below
+      read = false; // an unexpected stop of the kernel: the file is read and fitted as below
     }
-    if (items) results = items.map((item, i) => fromFileItem(item, i, args, kernel));
+    if (read) results = records;
   }
   if (!results) {
     const datasets = readDatasets(bytes.toString('utf8'));

@@ -47,10 +47,11 @@ export interface BellKernel {
   fit(input: ProfileInput): BellSummary | 'no_start' | null;
   /**
    * Every dataset of a datasets file (the reference README's format) given as its bytes, read
-   * without JSON.parse; null when the file is not one the kernel reads (not valid JSON, not ASCII,
-   * no "datasets" array of objects, …): the caller reads it with JSON.parse.
+   * without JSON.parse, handed to `each` in the file's order. False, before any is handed over,
+   * when the file is not one the kernel reads (not valid JSON, not ASCII, no "datasets" array of
+   * objects, …): the caller reads it with JSON.parse.
    */
-  fitFile(bytes: Uint8Array): FileItem[] | null;
+  fitFile(bytes: Uint8Array, each: (item: FileItem, index: number) => void): boolean;
   /** For tests: a JSON number as the kernel converts it; NaN when it leaves it to JSON.parse. */
   convertNumber(text: string): number;
 }
@@ -206,26 +207,23 @@ function instantiate(): BellKernel {
       if (code === 1) return 'no_start';
       return summary();
     },
-    fitFile(bytes) {
+    fitFile(bytes, each) {
       load(bytes);
       const count = x.scanDatasets();
-      if (count < 0) return null;
-      const items: FileItem[] = [];
+      if (count < 0) return false;
       for (let i = 0; i < count; i++) {
         const code = x.fitNext();
         if (code === 2) {
-          items.push({ kind: 'engine', text: ascii(bytes.subarray(out[23], out[24])) });
+          each({ kind: 'engine', text: ascii(bytes.subarray(out[23], out[24])) }, i);
           continue;
         }
         const kind = out[20];
         const idText = kind === 0 ? '' : ascii(bytes.subarray(out[21], out[22]));
         // as the engine's reader names a dataset: a string as it is, a number as JavaScript prints it
         const id = kind === 1 ? idText : kind === 2 ? String(Number(idText)) : `#${i + 1}`;
-        items.push(
-          code === 1 ? { kind: 'no_start', id, n: out[25] } : { kind: 'fit', id, summary: summary() },
-        );
+        each(code === 1 ? { kind: 'no_start', id, n: out[25] } : { kind: 'fit', id, summary: summary() }, i);
       }
-      return items;
+      return true;
     },
     convertNumber(text) {
       load(new TextEncoder().encode(text));

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fitProfile, NO_START_MESSAGE, type ProfileFit, type ProfileInput } from '@shared/fitting';
-import { bellKernel, type BellSummary } from '@shared/fitting/wasm/bell-kernel';
+import { bellKernel, type BellSummary, type FileItem } from '@shared/fitting/wasm/bell-kernel';
 import { compileKernel, KERNEL_MODULE, renderKernelModule } from '@shared/fitting/wasm/compile';
 import { readReference, rel, type RefDataset, type RefFit } from './helpers/reference';
 
@@ -253,12 +253,17 @@ describe('bell kernel in WebAssembly', () => {
 // the command line uses otherwise; RFC 8259 for what a JSON text is.
 describe('datasets files read by the bell kernel', () => {
   const encode = (text: string) => new TextEncoder().encode(text);
+  /** fitFile's items, or null when it left the file to JSON.parse. */
+  const readFile = (bytes: Uint8Array): FileItem[] | null => {
+    const items: FileItem[] = [];
+    return kernel!.fitFile(bytes, (item) => items.push(item)) ? items : null;
+  };
   const nameOf = (id: unknown, i: number) =>
     typeof id === 'string' || typeof id === 'number' ? String(id) : `#${i + 1}`;
 
   /** fitFile's items against JSON.parse of the same text; false when fitFile left the file alone. */
   function sameAsJsonParse(text: string): boolean {
-    const items = kernel!.fitFile(encode(text));
+    const items = readFile(encode(text));
     if (items === null) return false;
     const parsed = JSON.parse(text) as { datasets: Record<string, unknown>[] };
     expect(items.length).toBe(parsed.datasets.length);
@@ -278,7 +283,7 @@ describe('datasets files read by the bell kernel', () => {
 
   it('reads bell-5000 exactly as JSON.parse does', () => {
     const text = readFileSync(new URL('../../fixtures/reference/bell-5000.json', import.meta.url), 'utf8');
-    const items = kernel!.fitFile(encode(text));
+    const items = readFile(encode(text));
     expect(items?.every((item) => item.kind === 'fit')).toBe(true);
     expect(sameAsJsonParse(text)).toBe(true);
   });
@@ -392,7 +397,7 @@ describe('datasets files read by the bell kernel', () => {
         } catch {
           valid = false;
         }
-        const items = kernel!.fitFile(encode(text));
+        const items = readFile(encode(text));
         if (items === null) return true;
         expect(valid, `accepted a text JSON.parse refuses: ${text}`).toBe(true);
         accepted++;
@@ -404,7 +409,7 @@ describe('datasets files read by the bell kernel', () => {
     // random JSON documents: accepted only when they are datasets files JSON.parse reads the same
     fc.assert(
       fc.property(fc.json({ depthSize: 'medium' }), (text) => {
-        const items = kernel!.fitFile(encode(text));
+        const items = readFile(encode(text));
         if (items === null) return true;
         const parsed = JSON.parse(text) as { datasets?: unknown };
         return Array.isArray(parsed?.datasets) && sameAsJsonParse(text);
@@ -426,9 +431,9 @@ describe('datasets files read by the bell kernel', () => {
       `[]`,
       `{"datasets":[${JSON.stringify(ok)}]} x`,
     ])
-      expect(kernel!.fitFile(encode(text)), text.slice(0, 60)).toBeNull();
+      expect(readFile(encode(text)), text.slice(0, 60)).toBeNull();
     // a dataset it does not take itself goes back whole, for the engine
-    const items = kernel!.fitFile(
+    const items = readFile(
       encode(
         `{"datasets":[{"id":"a\\"b","pH":[4,5,6],"v":[1,2,1]},{"id":"c","pH":[4,5,6],"pH":[4,5,7],"v":[1,2,1]},` +
           `{"id":"d","pH":[4,5,6],"v":[1,"2",1]},{"id":"e","pH":[4,5,6],"v":[1,2,1.00000000000000000001]}]}`,
