@@ -1221,6 +1221,45 @@ function skipValue(): bool {
   return false; // not reached: every path above returns
 }
 
+/**
+ * Any value at pos of a text scanDatasets has already checked: only its end is looked for (strings
+ * skipped to their closing quote, brackets counted), which is all the second pass needs. Sets
+ * `escaped` when a string in it holds an escape.
+ */
+function skipChecked(): void {
+  escaped = false;
+  let depth = 0;
+  do {
+    const c = byteAt(pos);
+    if (c == 0x22) {
+      pos++;
+      for (;;) {
+        const d = byteAt(pos);
+        if (d == 0x22) break;
+        if (d == 0x5c) {
+          escaped = true;
+          pos++;
+        }
+        pos++;
+      }
+      pos++;
+    } else if (c == 0x7b || c == 0x5b) {
+      depth++;
+      pos++;
+    } else if (c == 0x7d || c == 0x5d) {
+      depth--;
+      pos++;
+    } else if (depth == 0) {
+      // a number or a literal: up to the next delimiter
+      while (pos < textLen) {
+        const d = byteAt(pos);
+        if (d == 0x2c || d == 0x7d || d == 0x5d || d == 0x20 || d == 0x0a || d == 0x0d || d == 0x09) break;
+        pos++;
+      }
+    } else pos++;
+  } while (depth > 0);
+}
+
 /** Whether the string just skipped (from start, on its quote) spells `word` exactly. */
 function spells(start: i32, word: string): bool {
   const n = word.length;
@@ -1323,7 +1362,7 @@ function nextDataset(): i32 {
   for (;;) {
     skipWhitespace();
     const keyStart = pos;
-    skipString();
+    skipChecked();
     let key = 0;
     if (escaped) plain = false;
     else if (spells(keyStart, 'id')) key = 1;
@@ -1337,7 +1376,7 @@ function nextDataset(): i32 {
     skipWhitespace();
     const valueStart = pos;
     const c = byteAt(pos);
-    skipValue();
+    skipChecked();
     if (key == 1) {
       if (c == 0x22) {
         if (escaped) plain = false;
