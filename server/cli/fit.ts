@@ -2,6 +2,7 @@
 // Reads the datasets format of the reference README, writes its results format to stdout.
 // Exit codes: 0 when the file was valid (a dataset that cannot be fitted is reported in place),
 // 2 for bad arguments, 1 for a file that cannot be read or is not a datasets file.
+import { closeSync, fstatSync, openSync, readSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { performance } from 'node:perf_hooks';
 import { ENGINE_VERSION, fitProfile, NO_START_MESSAGE, type ModelId, type ProfileFit } from '@shared/fitting';
@@ -204,6 +205,29 @@ function fitOne(d: Dataset, args: Args, kernel: BellKernel | null): Record<strin
     : failedResult(d.id, args.model, n, fit.error.code, fit.error.message);
 }
 
+/**
+ * A regular file read into the buffer `place(size)` gives, whole; null for anything else (a pipe,
+ * an empty file), which the caller reads with readFile. Errors are thrown as readFile throws them.
+ */
+function readInto(path: string, place: (size: number) => Uint8Array): Uint8Array | null {
+  const fd = openSync(path, 'r');
+  try {
+    const stats = fstatSync(fd);
+    const size = stats.size;
+    if (!stats.isFile() || size === 0) return null;
+    const buffer = place(size);
+    let done = 0;
+    while (done < size) {
+      const n = readSync(fd, buffer, done, size - done, done);
+      if (n === 0) return null; // the file shrank while it was read
+      done += n;
+    }
+    return buffer;
+  } finally {
+    closeSync(fd);
+  }
+}
+
 export async function run(argv: string[]): Promise<number> {
   if (argv.includes('--help') || argv.includes('-h')) {
     process.stdout.write(usage);
@@ -214,33 +238,38 @@ export async function run(argv: string[]): Promise<number> {
     process.stderr.write(`bellwether fit: ${args}\n\n${usage}`);
     return 2;
   }
-  let bytes: Buffer;
+  // BELLWETHER_FIT_ENGINE=js sends every profile to the engine (for comparisons; DEVELOPERS.md)
+  const useKernel =
+    args.model === 'bell' && args.bootstrap === 0 && process.env.BELLWETHER_FIT_ENGINE !== 'js';
+  const kernel = useKernel ? bellKernel() : null;
+  let bytes: Uint8Array;
+  let direct = false;
   try {
-    bytes = await readFile(args.file);
+    // a regular file goes straight into the kernel's buffer; anything else through readFile
+    const placed = kernel ? readInto(args.file, (size) => kernel.fileBuffer(size)) : null;
+    direct = placed !== null;
+    bytes = placed ?? (await readFile(args.file));
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
     process.stderr.write(`bellwether fit: cannot read ${args.file}${code ? ` (${code})` : ''}\n`);
     return 1;
   }
-  // BELLWETHER_FIT_ENGINE=js sends every profile to the engine (for comparisons; DEVELOPERS.md)
-  const useKernel =
-    args.model === 'bell' && args.bootstrap === 0 && process.env.BELLWETHER_FIT_ENGINE !== 'js';
-  const kernel = useKernel ? bellKernel() : null;
   let results: Record<string, unknown>[] | null = null;
   let t0 = performance.now();
   if (kernel) {
     // the kernel reads the file itself; a file it does not read goes to JSON.parse below
     const records: Record<string, unknown>[] = [];
+    const each = (item: FileItem, i: number) => records.push(fromFileItem(item, i, args, kernel));
     let read: boolean;
     try {
-      read = kernel.fitFile(bytes, (item, i) => records.push(fromFileItem(item, i, args, kernel)));
+      read = direct ? kernel.fitFileBuffer(each) : kernel.fitFile(bytes, each);
     } catch {
       read = false; // an unexpected stop of the kernel: the file is read and fitted as below
     }
     if (read) results = records;
   }
   if (!results) {
-    const datasets = readDatasets(bytes.toString('utf8'));
+    const datasets = readDatasets(new TextDecoder('utf-8', { ignoreBOM: true }).decode(bytes));
     if (typeof datasets === 'string') {
       process.stderr.write(`bellwether fit: ${args.file} is not a datasets file: ${datasets}\n`);
       return 1;

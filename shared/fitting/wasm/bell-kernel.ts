@@ -52,6 +52,13 @@ export interface BellKernel {
    * objects, …): the caller reads it with JSON.parse.
    */
   fitFile(bytes: Uint8Array, each: (item: FileItem, index: number) => void): boolean;
+  /**
+   * A place for a file's bytes inside the kernel, so that a caller can read a file straight into
+   * it (no copy); fitFileBuffer then reads them. Valid until the next call to the kernel.
+   */
+  fileBuffer(length: number): Uint8Array;
+  /** fitFile on the bytes written into the last fileBuffer. */
+  fitFileBuffer(each: (item: FileItem, index: number) => void): boolean;
   /** For tests: a JSON number as the kernel converts it; NaN when it leaves it to JSON.parse. */
   convertNumber(text: string): number;
 }
@@ -170,11 +177,31 @@ function instantiate(): BellKernel {
     };
   }
 
-  /** Copies bytes into the kernel's text buffer. */
-  function load(bytes: Uint8Array): void {
-    const ptr = x.textBuffer(bytes.length);
-    new Uint8Array(x.memory.buffer, ptr, bytes.length).set(bytes);
+  /** A view of the kernel's text buffer, made to hold `length` bytes. */
+  function textView(length: number): Uint8Array {
+    const ptr = x.textBuffer(length);
     views();
+    return new Uint8Array(x.memory.buffer, ptr, length);
+  }
+  let text: Uint8Array = new Uint8Array(0);
+
+  function fitText(each: (item: FileItem, index: number) => void): boolean {
+    const bytes = text;
+    const count = x.scanDatasets();
+    if (count < 0) return false;
+    for (let i = 0; i < count; i++) {
+      const code = x.fitNext();
+      if (code === 2) {
+        each({ kind: 'engine', text: ascii(bytes.subarray(out[23], out[24])) }, i);
+        continue;
+      }
+      const kind = out[20];
+      const idText = kind === 0 ? '' : ascii(bytes.subarray(out[21], out[22]));
+      // as the engine's reader names a dataset: a string as it is, a number as JavaScript prints it
+      const id = kind === 1 ? idText : kind === 2 ? String(Number(idText)) : `#${i + 1}`;
+      each(code === 1 ? { kind: 'no_start', id, n: out[25] } : { kind: 'fit', id, summary: summary() }, i);
+    }
+    return true;
   }
 
   return {
@@ -208,25 +235,18 @@ function instantiate(): BellKernel {
       return summary();
     },
     fitFile(bytes, each) {
-      load(bytes);
-      const count = x.scanDatasets();
-      if (count < 0) return false;
-      for (let i = 0; i < count; i++) {
-        const code = x.fitNext();
-        if (code === 2) {
-          each({ kind: 'engine', text: ascii(bytes.subarray(out[23], out[24])) }, i);
-          continue;
-        }
-        const kind = out[20];
-        const idText = kind === 0 ? '' : ascii(bytes.subarray(out[21], out[22]));
-        // as the engine's reader names a dataset: a string as it is, a number as JavaScript prints it
-        const id = kind === 1 ? idText : kind === 2 ? String(Number(idText)) : `#${i + 1}`;
-        each(code === 1 ? { kind: 'no_start', id, n: out[25] } : { kind: 'fit', id, summary: summary() }, i);
-      }
-      return true;
+      text = textView(bytes.length);
+      text.set(bytes);
+      return fitText(each);
     },
-    convertNumber(text) {
-      load(new TextEncoder().encode(text));
+    fileBuffer(length) {
+      text = textView(length);
+      return text;
+    },
+    fitFileBuffer: fitText,
+    convertNumber(number) {
+      const bytes = new TextEncoder().encode(number);
+      textView(bytes.length).set(bytes);
       return x.convertNumber();
     },
   };
