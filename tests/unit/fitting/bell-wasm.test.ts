@@ -3,7 +3,13 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fitProfile, NO_START_MESSAGE, type ProfileFit, type ProfileInput } from '@shared/fitting';
 import { bellKernel, type BellSummary, type FileItem } from '@shared/fitting/wasm/bell-kernel';
-import { compileKernel, KERNEL_MODULE, renderKernelModule } from '@shared/fitting/wasm/compile';
+import {
+  compileKernel,
+  KERNEL_MODULE,
+  renderKernelModule,
+  renderTTable,
+  T_TABLE_SOURCE,
+} from '@shared/fitting/wasm/compile';
 import { readReference, rel, type RefDataset, type RefFit } from './helpers/reference';
 
 // The WebAssembly bell kernel (shared/fitting/wasm/assembly/bell.ts) must give what the engine
@@ -70,6 +76,8 @@ describe('bell kernel in WebAssembly', () => {
   });
 
   it('is the build of the committed AssemblyScript source (npm run build:wasm)', async () => {
+    // its table of t quantiles is the engine's own
+    expect(readFileSync(T_TABLE_SOURCE, 'utf8') === renderTTable(), 'assembly/t975.ts is stale').toBe(true);
     const rebuilt = renderKernelModule(await compileKernel());
     expect(
       rebuilt === readFileSync(KERNEL_MODULE, 'utf8'),

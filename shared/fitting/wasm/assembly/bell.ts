@@ -16,6 +16,8 @@
 // profile that prepareProfile (ph-data.ts) would refuse is not fitted: the caller lets the engine
 // say why.
 
+import { T975_MAX, T975_TABLE } from './t975';
+
 const MAXN: i32 = 4096;
 const P: i32 = 3;
 const LN10: f64 = 2.302585092994046;
@@ -936,6 +938,11 @@ let distinctPH: i32 = 0;
 let dataScale: f64 = 1;
 const at = new StaticArray<i32>(P);
 
+/** Student's t 97.5 % quantile for dof > 0: from the table, or from the caller beyond it. */
+function tQuantile(dof: i32): f64 {
+  return dof <= T975_MAX ? unchecked(T975_TABLE[dof]) : t975(dof);
+}
+
 /**
  * Prepares and fits the profile in the input arrays (count points; weights read only when
  * hasWeights). Returns 2 for a profile the engine would refuse (the caller asks the engine why),
@@ -1010,7 +1017,7 @@ export function fitProfile(count: i32, hasWeights: bool): i32 {
   if (d2 && (unchecked(runTheta[2]) < lo || unchecked(runTheta[2]) > hi)) flags |= F_PKA2_OUTSIDE;
   if (d1 && d2) {
     const seKnown = isFinite(gapSe);
-    if (gap <= 1e-9 || (seKnown && dof > 0 && gap - t975(dof) * gapSe <= 0)) flags |= F_TOO_CLOSE;
+    if (gap <= 1e-9 || (seKnown && dof > 0 && gap - tQuantile(dof) * gapSe <= 0)) flags |= F_TOO_CLOSE;
     if (gap < NARROW_DELTA) flags |= F_NARROW;
   }
   if (nUsed < POINTS_PER_PARAMETER * q || distinctPH <= q) flags |= F_TOO_FEW;
