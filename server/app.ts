@@ -70,9 +70,9 @@ function sessionMiddleware({ pool, config }: AppDeps) {
 }
 
 const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
-  const send = (status: number, code: string, message: string, fields?: Record<string, string>) =>
-    res.status(status).json({ error: { code, message, ...(fields ? { fields } : {}) } });
-  if (error instanceof AppError) return send(error.status, error.code, error.message, error.fields);
+  const send = (status: number, code: string, message: string, fields?: Record<string, string>, currentVersion?: number) =>
+    res.status(status).json({ error: { code, message, ...(fields ? { fields } : {}), ...(currentVersion !== undefined ? { currentVersion } : {}) } });
+  if (error instanceof AppError) return send(error.status, error.code, error.message, error.fields, error.currentVersion);
   const e = error as { type?: string; status?: number; message?: string };
   if (e.type === 'entity.parse.failed') return send(400, 'malformed_json', 'The request body is not valid JSON.');
   if (e.type === 'entity.too.large') return send(413, 'too_large', 'The request is too large.');

@@ -118,6 +118,7 @@ describe('analysis of the generated kinetic study', () => {
     expect(rows.find((w) => w.well === 'B6')!.window?.source).toBe('automatic');
     const stale = await send(scientist, 'put', `/api/studies/${kineticStudyId}/analysis/settings`, { version: current.settingsVersion, settings });
     expect(stale.status).toBe(409);
+    expect(stale.body.error).toMatchObject({ code: 'stale_version', currentVersion: current.settingsVersion + 1 });
     expect((res.body as StudyAnalysis).plateReads[plate.id]).toEqual(expect.any(String));
     expect((res.body as StudyAnalysis).assay.readMode).toBe('kinetic');
 

@@ -118,6 +118,7 @@ describe('buffer series designer', () => {
     expect(cautions).toMatch(/eye protection/);
     const updated = await scientist.agent.patch(`/api/buffer-series/${saved.body.id}`).set('X-CSRF-Token', scientist.csrf).send({ name: 'renamed', version: 1 }).expect(200);
     expect(updated.body.version).toBe(2);
-    await scientist.agent.patch(`/api/buffer-series/${saved.body.id}`).set('X-CSRF-Token', scientist.csrf).send({ name: 'stale', version: 1 }).expect(409);
+    const stale = await scientist.agent.patch(`/api/buffer-series/${saved.body.id}`).set('X-CSRF-Token', scientist.csrf).send({ name: 'stale', version: 1 }).expect(409);
+    expect(stale.body.error).toMatchObject({ code: 'stale_version', currentVersion: 2 });
   });
 });

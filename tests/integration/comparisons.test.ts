@@ -120,6 +120,17 @@ describe('comparison of variants', () => {
     const csv = await viewer.agent.get(`/api/comparisons/${saved.body.id}/export.csv`).expect(200);
     expect(csv.text).toContain('apparent pKa1');
   });
+
+  it('when two people save the same version of a comparison, then the second gets 409 with the version it has now', async () => {
+    const input = { name: 'Round 1 pair', teamId: kinetic.teamId, entries: [entry(kinetic, 'FR1-WT'), entry(kinetic, 'FR1-D92N')], referenceKey: `${kinetic.id}:${variantId['FR1-WT']}` };
+    const saved = await lead.agent.post('/api/comparisons').set('X-CSRF-Token', lead.csrf).send(input).expect(201);
+    const version = (await lead.agent.get(`/api/comparisons/${saved.body.id}`).expect(200)).body.version as number;
+    await lead.agent.put(`/api/comparisons/${saved.body.id}`).set('X-CSRF-Token', lead.csrf).send({ ...input, name: 'first', version }).expect(200);
+    const stale = await lead.agent.put(`/api/comparisons/${saved.body.id}`).set('X-CSRF-Token', lead.csrf).send({ ...input, name: 'second', version });
+    expect(stale.status).toBe(409);
+    expect(stale.body.error).toMatchObject({ code: 'stale_version', currentVersion: version + 1 });
+    expect((await lead.agent.get(`/api/comparisons/${saved.body.id}`).expect(200)).body.name).toBe('first');
+  });
 });
 
 describe('study exports', () => {

@@ -55,6 +55,8 @@ describe('plate maps', () => {
     const stale = await scientist.agent.put(`/api/plates/${plate.id}/map`).set('X-CSRF-Token', scientist.csrf).send({ version: 1, map: map(6) });
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe('stale_version');
+    // the answer says which version the map has now
+    expect(stale.body.error.currentVersion).toBe(2);
     const detail = await viewer.agent.get(`/api/plates/${plate.id}`).expect(200);
     expect(detail.body.map.wells.A1.pH).toBe(4.5);
     expect(detail.body.version).toBe(2);

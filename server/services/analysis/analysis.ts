@@ -8,7 +8,7 @@ import type { AnalysisJob, ExclusionCreate, ExclusionView, RecomputeComparison, 
 import type { DesignedSeries } from '../../../shared/schemas/buffer-series';
 import type { Db, DbOrTx } from '../../db/client';
 import { analysisJobs, analysisRuns, analysisSettings, bufferSeries, exclusions, plates, preparations, profileFits, reads, studies, studyVariants, users } from '../../db/schema';
-import { AppError, badRequest, conflict } from '../../errors';
+import { AppError, badRequest, conflict, staleVersion } from '../../errors';
 import type { CurrentUser } from '../../types';
 import { writeAudit } from '../audit/write-audit';
 import { asJson, loadVisible } from '../records/audited';
@@ -177,6 +177,9 @@ export async function recomputeAndCompare(db: Db, user: CurrentUser, studyId: st
   };
 }
 
+const staleSettings = (current: number) =>
+  staleVersion('The analysis settings were changed by someone else since you opened them; reload.', current);
+
 export async function saveSettings(db: Db, user: CurrentUser, studyId: string, version: number, settings: StudyAnalysisSettings) {
   await db.transaction(async (tx) => {
     const study = await loadEditableStudy(tx, user, studyId);
@@ -198,14 +201,15 @@ export async function saveSettings(db: Db, user: CurrentUser, studyId: string, v
     }
     const current = await tx.query.analysisSettings.findFirst({ where: eq(analysisSettings.studyId, studyId) });
     const currentVersion = current?.version ?? 1;
-    if (currentVersion !== version) {
-      throw conflict('The analysis settings were changed by someone else since you opened them; reload.', 'stale_version');
-    }
+    if (currentVersion !== version) throw staleSettings(currentVersion);
     const values = { teamId: study.teamId, settings, version: currentVersion + 1, updatedBy: user.id, updatedAt: new Date() };
     const saved = current
       ? await tx.update(analysisSettings).set(values).where(and(eq(analysisSettings.studyId, studyId), eq(analysisSettings.version, version))).returning()
       : await tx.insert(analysisSettings).values({ studyId, ...values }).onConflictDoNothing().returning();
-    if (saved.length === 0) throw conflict('The analysis settings were changed by someone else since you opened them; reload.', 'stale_version');
+    if (saved.length === 0) {
+      const now = await tx.query.analysisSettings.findFirst({ where: eq(analysisSettings.studyId, studyId) });
+      throw staleSettings(now?.version ?? currentVersion);
+    }
     // Settings the engine cannot work with are refused before they are kept (the transaction rolls back).
     const check = analyseStudy((await buildAnalysisInput(tx, study)).input);
     if (!check.ok && check.error.code !== 'no_reads' && check.error.code !== 'no_plates') {

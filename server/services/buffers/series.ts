@@ -5,7 +5,7 @@ import { designSeries, makeRecipe, type BufferSystem, type SeriesInput } from '.
 import { phKey, type DesignedSeries, type SeriesDetail, type SeriesRequest, type SeriesSummary } from '../../../shared/schemas/buffer-series';
 import type { Db } from '../../db/client';
 import { bufferSeries, studies, teams, users } from '../../db/schema';
-import { badRequest, conflict } from '../../errors';
+import { badRequest, conflict, staleVersion } from '../../errors';
 import type { CurrentUser } from '../../types';
 import { writeAudit } from '../audit/write-audit';
 import { asJson, deleteAudited, insertAudited, listScope, loadVisible, visible } from '../records/audited';
@@ -125,20 +125,24 @@ async function assertSeriesEditable(tx: Parameters<Parameters<Db['transaction']>
   if (locked.length) assertEditable(locked[0]);
 }
 
+const staleSeries = (current: number) =>
+  staleVersion('This series was changed by someone else since you opened it; reload to see their version.', current);
+
 export async function updateSeries(db: Db, actor: CurrentUser, id: string, change: { name?: string; input?: SeriesRequest; version: number }) {
   return db.transaction(async (tx) => {
     const before = await loadVisible(tx, bufferSeries, id, actor, 'That buffer series');
     await assertSeriesEditable(tx, id);
-    if (before.version !== change.version) {
-      throw conflict('This series was changed by someone else since you opened it; reload to see their version.', 'stale_version');
-    }
+    if (before.version !== change.version) throw staleSeries(before.version);
     const design = change.input ? designFromRequest(change.input, await labSystems(tx)) : before.design;
     const [after] = await tx
       .update(bufferSeries)
       .set({ name: change.name ?? before.name, input: change.input ?? before.input, design, version: before.version + 1, updatedAt: new Date() })
       .where(and(eq(bufferSeries.id, id), eq(bufferSeries.version, change.version)))
       .returning();
-    if (!after) throw conflict('This series was changed by someone else since you opened it; reload to see their version.', 'stale_version');
+    if (!after) {
+      const [now] = await tx.select({ version: bufferSeries.version }).from(bufferSeries).where(eq(bufferSeries.id, id));
+      throw staleSeries(now?.version ?? before.version);
+    }
     await writeAudit(tx, { actorId: actor.id, teamId: after.teamId, entity: 'buffer-series', entityId: id, action: 'update', before: { name: before.name, input: before.input }, after: { name: after.name, input: after.input } });
     return after;
   });

@@ -7,7 +7,7 @@ import { fitGlobal } from '../../../shared/fitting';
 import type { AvailableProfile, ComparisonInput, ComparisonView, SavedComparison } from '../../../shared/schemas/comparisons';
 import type { Db } from '../../db/client';
 import { assays, comparisons, plates, profileFits, readerFiles, studies, studyEvents, users, variants } from '../../db/schema';
-import { badRequest, conflict } from '../../errors';
+import { badRequest, staleVersion } from '../../errors';
 import type { CurrentUser } from '../../types';
 import { writeAudit } from '../audit/write-audit';
 import { getAnalysis } from '../analysis/analysis';
@@ -196,7 +196,10 @@ export async function updateComparison(db: Db, user: CurrentUser, id: string, in
       .set({ name: input.name, notes: input.notes, entries: input.entries, referenceKey: input.referenceKey, includeUnapproved: input.includeUnapproved, globalFit: input.globalFit, version: before.version + 1, updatedAt: new Date() })
       .where(and(eq(comparisons.id, id), eq(comparisons.version, input.version)))
       .returning();
-    if (!after) throw conflict('This comparison was changed by someone else since you opened it; reload.', 'stale_version');
+    if (!after) {
+      const [now] = await tx.select({ version: comparisons.version }).from(comparisons).where(eq(comparisons.id, id));
+      throw staleVersion('This comparison was changed by someone else since you opened it; reload.', now?.version ?? before.version);
+    }
     await writeAudit(tx, { actorId: user.id, teamId: after.teamId, entity: 'comparison', entityId: id, action: 'update', before, after });
     return toSaved(after);
   });

@@ -6,7 +6,7 @@ import { emptyPlateMap, plateMapSchemaFor, type PlateMap } from '../../../shared
 import type { PlateDetail, PlateSummary } from '../../../shared/schemas/plates-types';
 import type { Db, Tx } from '../../db/client';
 import { assays, plates, plateTemplates, reads, studies, studyVariants, variants } from '../../db/schema';
-import { badRequest, conflict } from '../../errors';
+import { badRequest, staleVersion } from '../../errors';
 import type { CurrentUser } from '../../types';
 import { writeAudit } from '../audit/write-audit';
 import { asJson, deleteAudited, insertAudited, loadVisible, updateAudited } from '../records/audited';
@@ -111,9 +111,11 @@ export async function saveMap(db: Db, actor: CurrentUser, id: string, version: n
       .where(and(eq(plates.id, id), eq(plates.version, version)))
       .returning();
     if (!saved) {
-      throw conflict(
-        `This plate map was saved by someone else since you opened it (version ${plate.version}, yours ${version}). Reload to see their changes.`,
-        'stale_version',
+      const [now] = await tx.select({ version: plates.version }).from(plates).where(eq(plates.id, id));
+      const current = now?.version ?? plate.version;
+      throw staleVersion(
+        `This plate map was saved by someone else since you opened it (version ${current}, yours ${version}). Reload to see their changes.`,
+        current,
       );
     }
     await writeAudit(tx, {
