@@ -2,7 +2,7 @@
 // fixtures of tests/fixtures/readers (made by make-fixtures.ts; generated data).
 import fs from 'node:fs';
 import path from 'node:path';
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditLog, readerFiles, reads, studies, wellRecords } from '../../server/db/schema';
 import { parseReaderFile } from '../../server/import';
@@ -129,6 +129,13 @@ describe('reader files', () => {
     });
     expect(Buffer.compare(raw.body as Buffer, bytes)).toBe(0);
     expect(raw.headers['x-content-sha256']).toBe(imported.body.sha256);
+    // kept as uploaded, not compressed again (migration 0006): stored out of line, uncompressed
+    const stored = await t.db.execute<{ storage: string; compressed: boolean }>(
+      sql`select a.attstorage as storage, pg_column_compression(f.content) is not null as compressed
+          from pg_attribute a, reader_files f
+          where a.attrelid = 'reader_files'::regclass and a.attname = 'content' and f.id = ${imported.body.fileId}`,
+    );
+    expect(stored.rows[0]).toEqual({ storage: 'e', compressed: false });
 
     const again = await scientist.agent
       .post(`/api/plates/${plate.id}/reads`)
