@@ -64,6 +64,16 @@ export const teamMembers = pgTable(
   (t) => [primaryKey({ columns: [t.teamId, t.userId] }), index('team_members_user_idx').on(t.userId)],
 );
 
+/**
+ * Failed sign-ins counted per account and per address (server/auth/rate-limit-store.ts): kept in
+ * the database so that the limits hold across restarts and across app processes.
+ */
+export const signInLimits = pgTable('sign_in_limits', {
+  key: text().primaryKey(),
+  hits: integer().notNull(),
+  resetAt: timestamp({ withTimezone: true }).notNull(),
+});
+
 export const invitations = pgTable('invitations', {
   id: uuid().primaryKey().defaultRandom(),
   email: text().notNull(),

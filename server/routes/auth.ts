@@ -15,6 +15,7 @@ import {
 import { z } from 'zod';
 import { requirePermission, requireUser } from '../auth/authorize';
 import { newCsrfToken } from '../auth/csrf';
+import { PgRateLimitStore } from '../auth/rate-limit-store';
 import { findCurrentUser } from '../auth/current-user';
 import type { AppContext } from '../context';
 import { sendAfterCommit } from '../context';
@@ -57,10 +58,12 @@ function loginLimiters(ctx: AppContext) {
     throw new AppError('too_many_attempts', `Too many failed sign-ins. Wait ${windowMinutes} minutes, or reset your password.`, 429);
   };
   const common = { windowMs: windowMinutes * 60_000, skipSuccessfulRequests: true, standardHeaders: 'draft-8' as const, legacyHeaders: false, handler };
+  // counts in the database: they hold across restarts and across app processes
   return [
-    rateLimit({ ...common, limit: perAddress, keyGenerator: (req) => `ip:${ipKeyGenerator(req.ip ?? '')}` }),
+    rateLimit({ ...common, store: new PgRateLimitStore(ctx.db, 'sign-in:'), limit: perAddress, keyGenerator: (req) => `ip:${ipKeyGenerator(req.ip ?? '')}` }),
     rateLimit({
       ...common,
+      store: new PgRateLimitStore(ctx.db, 'sign-in:'),
       limit: perAccount,
       keyGenerator: (req) => {
         const email: unknown = (req.body as { email?: unknown } | undefined)?.email;

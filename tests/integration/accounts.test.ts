@@ -3,7 +3,7 @@
 import { eq, sql } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { auditLog, invitations, passwordResets, sessions, users } from '../../server/db/schema';
+import { auditLog, invitations, passwordResets, sessions, signInLimits, users } from '../../server/db/schema';
 import { latestMail, linkIn, startTestApp, type TestApp } from './helpers/app';
 import { createTeam, createUser } from './helpers/factories';
 import { signIn } from './helpers/session';
@@ -261,6 +261,8 @@ describe('throttling', () => {
   });
 
   it('when one address fails across many accounts, then it is throttled too', async () => {
+    // the counts live in the database this file's apps share: start from none
+    await t.db.delete(signInLimits);
     const tight = await startTestApp({ loginLimits: { perAccount: 100, perAddress: 3, windowMinutes: 15 } });
     try {
       for (let i = 0; i < 3; i += 1) {
@@ -270,5 +272,32 @@ describe('throttling', () => {
     } finally {
       await tight.close();
     }
+  });
+
+  it('when the app restarts, then the failed sign-ins counted before still count', async () => {
+    await t.db.delete(signInLimits);
+    const user = await createUser(t.db);
+    const before = await startTestApp();
+    try {
+      for (let i = 0; i < 5; i += 1) {
+        await request(before.app).post('/api/auth/sign-in').send({ email: user.email, password: 'wrong-password' }).expect(401);
+      }
+    } finally {
+      await before.close();
+    }
+    const after = await startTestApp();
+    try {
+      const blocked = await request(after.app).post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+      expect(blocked.status).toBe(429);
+      expect(blocked.headers['ratelimit']).toMatch(/r=0/);
+    } finally {
+      await after.close();
+    }
+    // a successful sign-in is taken back off the count (once its answer has gone out)
+    const other = await createUser(t.db);
+    await request(t.app).post('/api/auth/sign-in').send({ email: other.email, password: other.password }).expect(200);
+    const hits = async () =>
+      (await t.db.select().from(signInLimits).where(eq(signInLimits.key, `sign-in:account:${other.email.toLowerCase()}`)))[0]?.hits;
+    await expect.poll(hits, { timeout: 2000 }).toBe(0);
   });
 });
