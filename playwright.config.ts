@@ -26,7 +26,9 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: `node_modules/.bin/tsx e2e/serve.ts`,
+    // node itself, not the tsx command: tsx's launcher kills its child with SIGKILL when it does not
+    // answer a signal within 30 ms, which cut the cluster's removal short (it runs synchronously)
+    command: `node --import tsx e2e/serve.ts`,
     url: `http://localhost:${port}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,

@@ -18,9 +18,13 @@ const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bellwether-e2e-pg-'));
 const cluster = startCluster({ dataDir, port: await freePort(), throwaway: true, log: () => {} });
 let closing: (() => Promise<void>) | null = null;
 
+/** Playwright waits 20 s after SIGTERM before it kills this process: the cluster must go before. */
+const CLOSE_WITHIN_MS = 8_000;
+
 async function stop() {
   try {
-    await closing?.();
+    // an analysis job still running, or a request still open, must not keep the cluster alive
+    await Promise.race([closing?.(), new Promise((resolve) => setTimeout(resolve, CLOSE_WITHIN_MS).unref())]);
   } finally {
     cluster.stop();
     removeCluster(dataDir);
@@ -61,8 +65,9 @@ try {
   fs.mkdirSync(path.dirname(e2eStateFile), { recursive: true });
   fs.writeFileSync(e2eStateFile, JSON.stringify({ databaseUrl: url }));
   closing = async () => {
-    await new Promise<void>((resolve) => server.close(() => resolve()));
+    const closed = new Promise<void>((resolve) => server.close(() => resolve()));
     server.closeAllConnections();
+    await closed;
     await jobs.stop();
     mailer.close();
     await smtp.close();
