@@ -81,10 +81,6 @@ interface Exports {
   memory: WebAssembly.Memory;
   maxPoints(): number;
   pHPtr(): number;
-  hPtr(): number;
-  gPtr(): number;
-  yPtr(): number;
-  swPtr(): number;
   wPtr(): number;
   vPtr(): number;
   logFactPtr(): number;

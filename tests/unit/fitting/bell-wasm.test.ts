@@ -10,7 +10,7 @@ import {
   renderTTable,
   T_TABLE_SOURCE,
 } from '@shared/fitting/wasm/compile';
-import { readReference, rel, type RefDataset, type RefFit } from './helpers/reference';
+import { exactAgreement5000, readReference, type RefDataset } from './helpers/reference';
 
 // The WebAssembly bell kernel (shared/fitting/wasm/assembly/bell.ts) must give what the engine
 // gives. The engine is itself checked against outside references (reference-200/5000, NIST); here
@@ -107,27 +107,13 @@ describe('bell kernel in WebAssembly', () => {
   });
 
   it('matches the exact minima of bell-5000 within 1e-6 on at least 99.5 % (bell-5000.exact.json)', () => {
-    const data = readReference<{ datasets: RefDataset[] }>('bell-5000.json').datasets;
-    const exact = new Map(
-      readReference<{ results: RefFit[] }>('bell-5000.exact.json').results.map((r) => [r.id, r]),
-    );
-    let agree = 0;
-    let flaggedPKa = 0;
-    for (const d of data) {
-      const ref = exact.get(d.id);
+    const { agree, flaggedPKa, total } = exactAgreement5000((d) => {
       const s = kernel!.fit(d);
-      if (!ref || s === null || s === 'no_start') continue;
-      const worst = Math.max(
-        rel(s.V as number, ref.V as number),
-        rel(s.pKa1 as number, ref.pKa1 as number),
-        rel(s.pKa2 as number, ref.pKa2 as number),
-      );
-      if (worst <= 1e-6) agree++;
-      else if (s.flags.includes('pKa_too_close')) flaggedPKa++;
-    }
-    expect(agree / exact.size).toBeGreaterThanOrEqual(0.995);
+      return s === null || s === 'no_start' ? null : s;
+    });
+    expect(agree / total).toBeGreaterThanOrEqual(0.995);
     // as for the engine (reference-5000.test.ts): the misses are minima with pKa1 > pKa2
-    expect(agree + flaggedPKa).toBe(exact.size);
+    expect(agree + flaggedPKa).toBe(total);
   });
 
   it('leaves to the engine every profile the engine refuses, and one longer than it takes', () => {

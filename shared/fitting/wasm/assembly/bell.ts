@@ -83,18 +83,6 @@ export function maxPoints(): i32 {
 export function pHPtr(): usize {
   return changetype<usize>(inPH);
 }
-export function hPtr(): usize {
-  return changetype<usize>(inH);
-}
-export function gPtr(): usize {
-  return changetype<usize>(inG);
-}
-export function yPtr(): usize {
-  return changetype<usize>(inY);
-}
-export function swPtr(): usize {
-  return changetype<usize>(inSW);
-}
 export function wPtr(): usize {
   return changetype<usize>(inW);
 }

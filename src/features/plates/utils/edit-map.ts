@@ -4,7 +4,8 @@ import type { PlateMap, WellAssignment, WellRole } from '@shared/plate-map/schem
 
 export type WellPatch = Partial<WellAssignment>;
 
-const blankAssignment = (role: WellRole): WellAssignment => ({
+/** A well with only its role: no variant, pH, buffer, replicate or concentration. */
+export const blankAssignment = (role: WellRole): WellAssignment => ({
   role,
   variantId: null,
   pH: null,

@@ -4,8 +4,7 @@ import { patchWells } from '@/features/plates/utils/edit-map';
 import { typedStarts } from '@/features/plates/utils/typed-value';
 import { roleByKey, roleHints, roleKeys, wellRoleLabels, wellRoles } from '@/features/plates/utils/roles';
 import { emptyPlateMap } from '@shared/plate-map/schema';
-
-const WT = '00000000-0000-4000-8000-000000000001';
+import { WT } from './wells';
 
 describe('the brush', () => {
   it('when nothing is chosen but a role, then painting sets the role and keeps what the well has', () => {

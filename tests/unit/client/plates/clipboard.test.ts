@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { emptyPlateMap, type PlateMap, type WellAssignment } from '@shared/plate-map/schema';
+import { emptyPlateMap, type PlateMap } from '@shared/plate-map/schema';
 import {
   clipText,
   copyWells,
@@ -11,18 +11,7 @@ import {
   type Clip,
 } from '@/features/plates/utils/clipboard';
 import { allNames } from '@/features/plates/utils/grid';
-
-const WT = '00000000-0000-4000-8000-000000000001';
-
-const well = (over: Partial<WellAssignment>): WellAssignment => ({
-  role: 'sample',
-  variantId: null,
-  pH: null,
-  buffer: null,
-  replicate: null,
-  concentrationUm: null,
-  ...over,
-});
+import { well, WT } from './wells';
 
 // B2 sample, B3 empty, C2 blank, C3 standard.
 const source: PlateMap = {

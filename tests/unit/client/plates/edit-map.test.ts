@@ -1,19 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { emptyPlateMap, type PlateMap, type WellAssignment } from '@shared/plate-map/schema';
 import { clearWells, common, normalise, patchEach, patchWells } from '@/features/plates/utils/edit-map';
-
-const WT = '00000000-0000-4000-8000-000000000001';
-const D92N = '00000000-0000-4000-8000-000000000002';
-
-const well = (over: Partial<WellAssignment>): WellAssignment => ({
-  role: 'sample',
-  variantId: null,
-  pH: null,
-  buffer: null,
-  replicate: null,
-  concentrationUm: null,
-  ...over,
-});
+import { D92N, well, WT } from './wells';
 
 const mapOf = (wells: Record<string, WellAssignment>): PlateMap => ({ wells, replicatesRequired: 3 });
 

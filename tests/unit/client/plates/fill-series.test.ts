@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { emptyPlateMap, type PlateMap, type WellAssignment } from '@shared/plate-map/schema';
+import { emptyPlateMap, type PlateMap } from '@shared/plate-map/schema';
 import type { PhPoint } from '@/features/plates/api/get-study-context';
 import { fillSeries, type FillSeriesInput } from '@/features/plates/utils/fill-series';
+import { well, WT } from './wells';
 
 // Invented series: acetate below pH 5.5, MES to 6.5, HEPES above (UI-logic input, no source needed).
 const point = (pH: number): PhPoint => {
@@ -104,28 +105,17 @@ describe('fill pH series down a column', () => {
 });
 
 describe('fill pH series: what it keeps and odd input', () => {
-  const WT = '00000000-0000-4000-8000-000000000001';
-  const existing = (w: Partial<WellAssignment>): WellAssignment => ({
-    role: 'sample',
-    variantId: null,
-    pH: null,
-    buffer: null,
-    replicate: null,
-    concentrationUm: null,
-    ...w,
-  });
-
   it('when wells already have roles and variants, then only their pH and buffer change', () => {
     const before: PlateMap = {
       wells: {
-        A1: existing({ variantId: WT, replicate: 2, pH: 9, buffer: 'hepes' }),
-        A2: existing({ role: 'blank', replicate: 1 }),
+        A1: well({ variantId: WT, replicate: 2, pH: 9, buffer: 'hepes' }),
+        A2: well({ role: 'blank', replicate: 1 }),
       },
       replicatesRequired: 3,
     };
     const r = fill({ points: series(4, 5) }, before);
-    expect(r.map.wells.A1).toEqual(existing({ variantId: WT, replicate: 2, pH: 4, buffer: 'acetate' }));
-    expect(r.map.wells.A2).toEqual(existing({ role: 'blank', replicate: 1, pH: 5, buffer: 'acetate' }));
+    expect(r.map.wells.A1).toEqual(well({ variantId: WT, replicate: 2, pH: 4, buffer: 'acetate' }));
+    expect(r.map.wells.A2).toEqual(well({ role: 'blank', replicate: 1, pH: 5, buffer: 'acetate' }));
     expect(before.wells.A1.pH).toBe(9);
   });
 

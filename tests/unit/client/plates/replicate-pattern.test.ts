@@ -4,9 +4,8 @@ import type { PhPoint } from '@/features/plates/api/get-study-context';
 import { fillSeries } from '@/features/plates/utils/fill-series';
 import { allNames } from '@/features/plates/utils/grid';
 import { replicatePattern, type PatternInput } from '@/features/plates/utils/replicate-pattern';
+import { D92N, WT } from './wells';
 
-const WT = '00000000-0000-4000-8000-000000000001';
-const D92N = '00000000-0000-4000-8000-000000000002';
 const E35Q = '00000000-0000-4000-8000-000000000003';
 
 const lay = (input: Partial<PatternInput>, map: PlateMap = emptyPlateMap(), format: 96 | 384 = 96) =>

@@ -30,3 +30,39 @@ export interface RefFit {
 }
 
 export const rel = (a: number, b: number): number => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
+
+/** A fit as the bell-5000 agreement check reads it. */
+export interface BellValues {
+  V: number | null;
+  pKa1: number | null;
+  pKa2: number | null;
+  flags: string[];
+}
+
+/**
+ * Agreement with the exact minima of bell-5000 (bell-5000.exact.json): how many a fitter meets
+ * within 1e-6 relative in V, pKa1 and pKa2, how many of the others it flags pKa_too_close, and how
+ * many exact minima there are. `fit` returns null for a profile it did not fit.
+ */
+export function exactAgreement5000(fit: (d: RefDataset) => BellValues | null) {
+  const data = readReference<{ datasets: RefDataset[] }>('bell-5000.json').datasets;
+  const exact = new Map(
+    readReference<{ results: RefFit[] }>('bell-5000.exact.json').results.map((r) => [r.id, r]),
+  );
+  let agree = 0;
+  let flaggedPKa = 0;
+  for (const d of data) {
+    const ref = exact.get(d.id);
+    if (!ref) continue;
+    const f = fit(d);
+    if (!f) continue;
+    const worst = Math.max(
+      rel(f.V as number, ref.V as number),
+      rel(f.pKa1 as number, ref.pKa1 as number),
+      rel(f.pKa2 as number, ref.pKa2 as number),
+    );
+    if (worst <= 1e-6) agree++;
+    else if (f.flags.includes('pKa_too_close')) flaggedPKa++;
+  }
+  return { agree, flaggedPKa, total: exact.size };
+}
