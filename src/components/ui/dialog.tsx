@@ -56,7 +56,7 @@ export function Dialog({ open, onClose, title, description, children, footer, wi
             </button>
           </div>
           <div className="overflow-auto px-5 py-4">{children}</div>
-          {footer && <div className="flex justify-end gap-2 border-t border-line px-5 py-3">{footer}</div>}
+          {footer && <div className="flex flex-wrap justify-end gap-2 border-t border-line px-5 py-3">{footer}</div>}
         </div>
       )}
     </dialog>
